@@ -1,0 +1,23 @@
+// Loopwright's engine: the public surface. Everything else under engine/ is internal.
+// Pure TypeScript: no DOM, React, Electron or Node built-ins (tests/engine/boundary.test.ts).
+
+export type * from './model/types.js';
+export type * from './analysis/results.js';
+export type { Problem, Severity } from './model/problems.js';
+export { formatProblem } from './model/problems.js';
+export { CURRENT_VERSION, FORMAT_NAME } from './model/types.js';
+export type { LoadResult } from './model/load.js';
+export { parseJob, loadJob } from './model/load.js';
+export { serialiseJob, toFileObject } from './model/serialise.js';
+export { newJob, defaultLinkFor, STANDARD_SIZES } from './model/defaults.js';
+export { analyse } from './analysis/analyse.js';
+export type { Breakdown, Segment } from './analysis/breakdown.js';
+export { loopBreakdown } from './analysis/breakdown.js';
+export type { ResolvedRules, RuleValue } from './analysis/basis.js';
+export { resolveRules } from './analysis/basis.js';
+export { linkRole } from './analysis/network.js';
+export { deviceMark } from './analysis/devices.js';
+export const CAUTION =
+  'Loopwright is a design aid. Its results do not replace verification: every installation must be ' +
+  'inspected and tested (including measured earth-fault loop impedance) before it is put into service, ' +
+  'and local wiring rules and licensed practice govern.';
