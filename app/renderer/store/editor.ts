@@ -1,0 +1,216 @@
+// The renderer's store: the job (saved), session state (selection, highlight, file) and
+// derived results (analyse(job), recomputed once per change). Every edit goes through apply(),
+// is validated by the engine and becomes one undo step.
+import { create } from 'zustand';
+import { newJob, type CircuitResult, type Job, type Results } from '../../../engine/index.js';
+import { derive } from './derive.js';
+import { firstError, describe } from './derive.js';
+import { applyEdit, EditError, onlyMoves, touchedIds, type ApplyOutcome, type Edit } from './edits.js';
+
+export type { Edit, ApplyOutcome } from './edits.js';
+
+/** Undo steps kept. */
+export const HISTORY_LIMIT = 200;
+
+interface Step {
+  job: Job;
+  label: string;
+}
+
+export interface EditorState {
+  job: Job;
+  results: Results;
+  resultById: Record<string, CircuitResult>;
+  selection: { nodes: string[]; links: string[] };
+  fileName: string | null;
+  filePath: string | null;
+  dirty: boolean;
+  canUndo: boolean;
+  canRedo: boolean;
+  highlightPath: string[] | null;
+  breakdownLink: string | null;
+  message: { kind: 'info' | 'error'; text: string } | null;
+  /** A request for the sheet to centre these ids (seq changes on every request). */
+  focus: { ids: string[]; seq: number } | null;
+  /** Labels of the next undo and redo steps, for menus ("Undo move"). */
+  undoLabel: string | null;
+  redoLabel: string | null;
+
+  apply(edit: Edit, label?: string): ApplyOutcome;
+  /** Checks an edit without applying it. */
+  check(edit: Edit): ApplyOutcome;
+  undo(): void;
+  redo(): void;
+  loadJob(job: Job, file?: { name: string; path?: string | null }): void;
+  select(sel: { nodes?: string[]; links?: string[] }): void;
+  markSaved(file?: { name: string; path?: string | null }): void;
+  setHighlight(path: string[] | null, breakdownLink?: string | null): void;
+  setMessage(m: EditorState['message']): void;
+  /** Live positions while dragging: no validation, no history; commit with apply({op:'move'}). */
+  moveLive(moves: Array<{ id: string; at: { x: number; y: number } }>): void;
+  /** Asks the sheet to centre the given ids. */
+  requestFocus(ids: string[]): void;
+}
+
+// Kept outside the state: history and the last saved document.
+let past: Step[] = [];
+let future: Step[] = [];
+let savedJob: Job | null = null;
+let gestureBase: Job | null = null;
+let focusSeq = 0;
+
+function existing(job: Job, sel: { nodes: string[]; links: string[] }) {
+  const nodes = new Set(job.nodes.map((n) => n.id));
+  const links = new Set(job.links.map((l) => l.id));
+  const kept = { nodes: sel.nodes.filter((id) => nodes.has(id)), links: sel.links.filter((id) => links.has(id)) };
+  return kept.nodes.length === sel.nodes.length && kept.links.length === sel.links.length ? sel : kept;
+}
+
+function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; reason: string; field?: string } {
+  let next: Job;
+  try {
+    next = applyEdit(job, edit);
+  } catch (e) {
+    if (e instanceof EditError) return { ok: false, reason: e.message, ...(e.field ? { field: e.field } : {}) };
+    throw e;
+  }
+  if (next === job) return { ok: true, next };
+  const problem = firstError(next, touchedIds(edit));
+  if (problem) return { ok: false, reason: describe(problem), ...(problem.field ? { field: problem.field } : {}) };
+  return { ok: true, next };
+}
+
+const initialJob = newJob();
+savedJob = initialJob;
+const initial = derive(initialJob, {});
+
+export const useEditor = create<EditorState>()((set, get) => {
+  /** Moves the store to a new document state, recomputing what depends on it. */
+  function become(job: Job, reanalyse: boolean, extra: Partial<EditorState> = {}) {
+    const s = get();
+    const derived = reanalyse ? derive(job, s.resultById) : null;
+    const known = (id: string) => job.nodes.some((n) => n.id === id) || job.links.some((l) => l.id === id);
+    const highlightPath = s.highlightPath && s.highlightPath.every(known) ? s.highlightPath : null;
+    const breakdownLink = s.breakdownLink && job.links.some((l) => l.id === s.breakdownLink) ? s.breakdownLink : null;
+    set({
+      job,
+      ...(derived ? { results: derived.results, resultById: derived.resultById } : {}),
+      ...(derived?.error ? { message: { kind: 'error' as const, text: derived.error } } : {}),
+      selection: existing(job, s.selection),
+      highlightPath,
+      breakdownLink,
+      dirty: job !== savedJob,
+      canUndo: past.length > 0,
+      canRedo: future.length > 0,
+      undoLabel: past.at(-1)?.label ?? null,
+      redoLabel: future.at(-1)?.label ?? null,
+      ...extra,
+    });
+  }
+
+  return {
+    job: initialJob,
+    results: initial.results,
+    resultById: initial.resultById,
+    selection: { nodes: [], links: [] },
+    fileName: null,
+    filePath: null,
+    dirty: false,
+    canUndo: false,
+    canRedo: false,
+    highlightPath: null,
+    breakdownLink: null,
+    message: null,
+    focus: null,
+    undoLabel: null,
+    redoLabel: null,
+
+    apply(edit, label = 'edit') {
+      const base = gestureBase ?? get().job;
+      const current = get().job;
+      const outcome = trial(current, edit);
+      if (!outcome.ok) {
+        set({ message: { kind: 'error', text: outcome.reason } });
+        return { ok: false, reason: outcome.reason, ...(outcome.field ? { field: outcome.field } : {}) };
+      }
+      gestureBase = null;
+      if (outcome.next === base) {
+        if (current !== base) become(base, false);
+        return { ok: true };
+      }
+      past.push({ job: base, label });
+      if (past.length > HISTORY_LIMIT) past = past.slice(past.length - HISTORY_LIMIT);
+      future = [];
+      const wasError = get().message?.kind === 'error';
+      become(outcome.next, !onlyMoves(edit), wasError ? { message: null } : {});
+      return { ok: true };
+    },
+
+    check(edit) {
+      const outcome = trial(get().job, edit);
+      return outcome.ok ? { ok: true } : { ok: false, reason: outcome.reason, ...(outcome.field ? { field: outcome.field } : {}) };
+    },
+
+    undo() {
+      const step = past.pop();
+      if (!step) return;
+      gestureBase = null;
+      future.push({ job: get().job, label: step.label });
+      become(step.job, true, { message: { kind: 'info', text: `Undid ${step.label}` } });
+    },
+
+    redo() {
+      const step = future.pop();
+      if (!step) return;
+      gestureBase = null;
+      past.push({ job: get().job, label: step.label });
+      become(step.job, true, { message: { kind: 'info', text: `Redid ${step.label}` } });
+    },
+
+    loadJob(job, file) {
+      past = [];
+      future = [];
+      gestureBase = null;
+      savedJob = job;
+      set({ selection: { nodes: [], links: [] }, highlightPath: null, breakdownLink: null, resultById: {} });
+      become(job, true, {
+        fileName: file?.name ?? null,
+        filePath: file?.path ?? null,
+        message: null,
+      });
+    },
+
+    select(sel) {
+      const s = get().selection;
+      set({ selection: existing(get().job, { nodes: sel.nodes ?? s.nodes, links: sel.links ?? s.links }) });
+    },
+
+    markSaved(file) {
+      savedJob = get().job;
+      set({
+        dirty: false,
+        ...(file ? { fileName: file.name, filePath: file.path ?? null } : {}),
+      });
+    },
+
+    setHighlight(path, breakdownLink) {
+      set({ highlightPath: path, ...(breakdownLink !== undefined ? { breakdownLink } : {}) });
+    },
+
+    setMessage(message) {
+      set({ message });
+    },
+
+    moveLive(moves) {
+      const job = get().job;
+      if (!gestureBase) gestureBase = job;
+      const next = applyEdit(job, { op: 'move', moves });
+      if (next !== job) set({ job: next, dirty: true });
+    },
+
+    requestFocus(ids) {
+      focusSeq += 1;
+      set({ focus: { ids, seq: focusSeq } });
+    },
+  };
+});

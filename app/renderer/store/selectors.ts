@@ -1,0 +1,75 @@
+// Selectors at module level, stable per id, so components subscribe to exactly their record.
+import type { CircuitResult, JobNode, Link } from '../../../engine/index.js';
+import type { EditorState } from './editor.js';
+
+type Selector<T> = (s: EditorState) => T;
+
+function cached<T>(cache: Map<string, Selector<T>>, id: string, make: () => Selector<T>): Selector<T> {
+  let sel = cache.get(id);
+  if (!sel) {
+    sel = make();
+    cache.set(id, sel);
+  }
+  return sel;
+}
+
+// Index by id, rebuilt only when the array itself changes (once per edit, not per component).
+function indexer<T extends { id: string }>(pick: (s: EditorState) => T[]) {
+  let source: T[] | null = null;
+  let index = new Map<string, T>();
+  return (s: EditorState): Map<string, T> => {
+    const list = pick(s);
+    if (list !== source) {
+      source = list;
+      index = new Map(list.map((item) => [item.id, item]));
+    }
+    return index;
+  };
+}
+
+const nodeIndex = indexer((s) => s.job.nodes);
+const linkIndex = indexer((s) => s.job.links);
+
+const nodeSelectors = new Map<string, Selector<JobNode | undefined>>();
+const linkSelectors = new Map<string, Selector<Link | undefined>>();
+const resultSelectors = new Map<string, Selector<CircuitResult | undefined>>();
+
+export function selectNode(id: string): Selector<JobNode | undefined> {
+  return cached(nodeSelectors, id, () => (s) => nodeIndex(s).get(id));
+}
+
+export function selectLink(id: string): Selector<Link | undefined> {
+  return cached(linkSelectors, id, () => (s) => linkIndex(s).get(id));
+}
+
+export function selectResult(id: string): Selector<CircuitResult | undefined> {
+  return cached(resultSelectors, id, () => (s) => s.resultById[id]);
+}
+
+// An id list that keeps its identity while the ids (and their order) stay the same.
+function idList<T extends { id: string }>(pick: (s: EditorState) => T[]): Selector<string[]> {
+  let source: T[] | null = null;
+  let ids: string[] = [];
+  return (s) => {
+    const list = pick(s);
+    if (list === source) return ids;
+    source = list;
+    const same = list.length === ids.length && list.every((item, i) => item.id === ids[i]);
+    if (!same) ids = list.map((item) => item.id);
+    return ids;
+  };
+}
+
+export const selectNodeIds: Selector<string[]> = idList((s) => s.job.nodes);
+export const selectLinkIds: Selector<string[]> = idList((s) => s.job.links);
+
+export const selectSelection = (s: EditorState) => s.selection;
+export const selectResults = (s: EditorState) => s.results;
+export const selectHighlight = (s: EditorState) => s.highlightPath;
+export const selectMessage = (s: EditorState) => s.message;
+export const selectDirty = (s: EditorState) => s.dirty;
+
+/** Whether an id is selected (node or link). */
+export function isSelected(s: EditorState, id: string): boolean {
+  return s.selection.nodes.includes(id) || s.selection.links.includes(id);
+}
