@@ -1,0 +1,75 @@
+// Number and word formatting for the readable output. Rounding is for display only:
+// the JSON results are never rounded.
+
+import type { Cable, Status } from '../../engine/index.js';
+
+const DASH = '–';
+
+function fixed(value: number, digits: number): string {
+  const text = value.toFixed(digits);
+  return text === `-${(0).toFixed(digits)}` ? (0).toFixed(digits) : text;
+}
+
+/** Ω: three decimals, four below 0.1 Ω so small mains and submains still show. */
+export function ohms(value: number | null): string {
+  if (value === null) return DASH;
+  return fixed(value, Math.abs(value) < 0.1 ? 4 : 3);
+}
+
+/** A current (A): whole amperes from 100 A, one decimal below. */
+export function amps(value: number | null): string {
+  if (value === null) return DASH;
+  return Math.abs(value) >= 100 ? fixed(value, 0) : trim(fixed(value, 1));
+}
+
+/** A time (s), as briefly as it reads exactly: 0.4, 5, 0.02. */
+export function seconds(value: number | null): string {
+  if (value === null) return DASH;
+  if (value > 0 && value < 0.001) return value.toPrecision(2);
+  return trim(fixed(value, 3));
+}
+
+/** A length (m), one decimal. */
+export function metres(value: number | null): string {
+  if (value === null) return DASH;
+  return fixed(value, 1);
+}
+
+/** A ratio as a whole percentage. */
+export function percent(ratio: number | null): string {
+  if (ratio === null) return DASH;
+  return fixed(ratio * 100, 0);
+}
+
+function trim(text: string): string {
+  return text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
+}
+
+/** A cable as the trade writes it: `2.5/2.5 Cu`, `2×95/50 Al`, `95 Al/50 Cu`. */
+export function cableMark(cable: Cable): string {
+  const sets = cable.parallel !== undefined && cable.parallel > 1 ? `${cable.parallel}×` : '';
+  const earthMaterial = cable.earthMaterial ?? cable.material;
+  const sizes =
+    earthMaterial === cable.material
+      ? `${cable.active}/${cable.earth} ${cable.material}`
+      : `${cable.active} ${cable.material}/${cable.earth} ${earthMaterial}`;
+  return `${sets}${sizes}`;
+}
+
+/** The status in plain words. */
+export const STATUS_WORD: Record<Status, string> = {
+  pass: 'pass',
+  fail: 'FAIL',
+  rcd: 'relies on RCD',
+  unchecked: 'unchecked',
+};
+
+/** The summary line: `12 pass, 1 fail, 1 relies on RCD, 2 unchecked`. */
+export function summaryLine(summary: Record<Status, number>): string {
+  return `${summary.pass} pass, ${summary.fail} fail, ${summary.rcd} relies on RCD, ${summary.unchecked} unchecked`;
+}
+
+/** Cut free text to a column width, marking the cut. */
+export function clip(text: string, width: number): string {
+  return text.length <= width ? text : `${text.slice(0, width - 1)}…`;
+}

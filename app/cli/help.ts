@@ -1,0 +1,46 @@
+// Help texts, built from the command registry so every command and option is described.
+
+import { describeOptions } from './args.js';
+import type { Command } from './command.js';
+
+export const RUN = 'npm run --silent cli --';
+
+const HELP_USAGE = 'help [COMMAND]';
+
+export function generalHelp(commands: Readonly<Record<string, Command>>): string {
+  const entries = Object.values(commands).map((c) => [c.usage, c.summary] as const);
+  entries.push([HELP_USAGE, 'describe every command, or one command in full']);
+  const width = Math.max(...entries.map(([u]) => u.length));
+  const lines = [
+    'Loopwright command line: fault-loop impedance checks for low-voltage installations.',
+    '',
+    `Usage: ${RUN} COMMAND [ARGUMENTS] [OPTIONS]`,
+    '',
+    'Commands:',
+    ...entries.map(([usage, summary]) => `  ${usage.padEnd(width)}  ${summary}`),
+  ];
+  for (const [name, command] of Object.entries(commands)) {
+    lines.push('', `Options of ${name}:`, ...describeOptions(command.options));
+  }
+  lines.push(
+    '',
+    'Exit status: 0 success (every checked circuit passes); 1 a circuit fails or relies on an RCD;',
+    '2 the job could not be read or the command line was wrong.',
+    '',
+    `Run \`${RUN} COMMAND --help\` for one command in full.`,
+  );
+  return `${lines.join('\n')}\n`;
+}
+
+export function commandHelp(name: string, command: Command): string {
+  const lines = [
+    `Usage: ${RUN} ${command.usage}`,
+    '',
+    `${name}: ${command.summary}`,
+    ...(command.details.length > 0 ? ['', ...command.details] : []),
+    '',
+    'Options:',
+    ...describeOptions(command.options),
+  ];
+  return `${lines.join('\n')}\n`;
+}
