@@ -1,0 +1,27 @@
+// analyse(job): every link checked, in file order, with the worst fault path and a summary.
+// The sheet, the command line, the printout and the tests all call this one function.
+
+import type { Job } from '../model/types.js';
+import { resolveRules } from './basis.js';
+import { checkLink } from './check.js';
+import { LoopSums } from './loop.js';
+import { Network } from './network.js';
+import type { Results, Summary } from './results.js';
+import { worstPath } from './worst-path.js';
+
+export function analyse(job: Job): Results {
+  const rules = resolveRules(job.rules);
+  const net = new Network(job);
+  const sums = new LoopSums(net, rules);
+  const circuits = job.links.map((link) => checkLink(sums, link));
+  const summary: Summary = { pass: 0, fail: 0, rcd: 0, unchecked: 0 };
+  for (const c of circuits) summary[c.status] += 1;
+  return {
+    format: 'loopwright.results',
+    version: 1,
+    basis: rules.basis,
+    circuits,
+    worst: worstPath(net, job.links, circuits),
+    summary,
+  };
+}

@@ -1,0 +1,96 @@
+// Loading a job: parse the text, check the envelope, refuse a newer version, migrate, validate
+// strictly, and return every problem with where it is. Never throws.
+
+import type { Job, JobNode, Link } from './types.js';
+import { CURRENT_VERSION, FORMAT_NAME } from './types.js';
+import type { Problem } from './problems.js';
+import { isObject, Site, type Json } from './fields.js';
+import { migrate, MIGRATIONS, type Migration } from './migrations.js';
+import { validateDetails } from './job-details.js';
+import { validateRules } from './rules.js';
+import { validateNode } from './nodes.js';
+import { validateLink } from './links.js';
+import { checkGraph } from './graph-rules.js';
+import { sizeWarnings } from './sizes.js';
+
+export type LoadResult =
+  | { ok: true; job: Job; warnings: Problem[]; migratedFrom: number | null }
+  | { ok: false; problems: Problem[] };
+
+const KNOWN_KEYS = new Set(['format', 'version', 'job', 'rules', 'nodes', 'links']);
+
+function fileProblem(message: string): LoadResult {
+  return { ok: false, problems: [{ severity: 'error', where: 'file', field: '', message }] };
+}
+
+/** Read a job from the text of a `.lwj` file. */
+export function parseJob(text: string): LoadResult {
+  let value: unknown;
+  try {
+    value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+  } catch (e) {
+    const detail = e instanceof Error ? e.message : String(e);
+    return fileProblem(`the file is not valid JSON (${detail})`);
+  }
+  return loadJob(value);
+}
+
+/** Read a job from an already-parsed file object (or anything else). */
+export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS): LoadResult {
+  if (!isObject(value)) return fileProblem('the file is not a Loopwright job: expected a JSON object');
+  if (value.format !== FORMAT_NAME) {
+    return fileProblem(`the file is not a Loopwright job: format must be "${FORMAT_NAME}", got ${JSON.stringify(value.format)}`);
+  }
+  const version = value.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
+    return fileProblem(`version must be a whole number ≥ 1, got ${JSON.stringify(version)}`);
+  }
+  if (version > CURRENT_VERSION) {
+    return fileProblem(
+      `the file has format version ${version}, newer than this program reads (up to version ${CURRENT_VERSION}); open it with a newer Loopwright. Nothing was read.`,
+    );
+  }
+  const migrated = migrate(value, version, CURRENT_VERSION, chain);
+  if (!migrated.ok) return fileProblem(migrated.message);
+  return validateFile(migrated.file, migrated.migratedFrom);
+}
+
+function validateFile(file: Json, migratedFrom: number | null): LoadResult {
+  const problems: Problem[] = [];
+  const top = new Site(problems, 'file');
+  const details = validateDetails(file.job, new Site(problems, 'job'));
+  const rules = validateRules(file.rules, new Site(problems, 'rules'));
+
+  const nodes: Array<{ item: JobNode; index: number }> = [];
+  const links: Array<{ item: Link; index: number }> = [];
+  if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes', file.nodes);
+  else file.nodes.forEach((raw, index) => {
+    const node = validateNode(raw, index, problems);
+    if (node) nodes.push({ item: node, index });
+  });
+  if (file.links === undefined) {
+    // A job with nodes only is fine: nothing to check yet.
+  } else if (!Array.isArray(file.links)) top.bad('links', 'a list of links', file.links);
+  else file.links.forEach((raw, index) => {
+    const link = validateLink(raw, index, problems);
+    if (link) links.push({ item: link, index });
+  });
+  checkGraph(nodes, links, problems);
+  problems.push(...sizeWarnings(links));
+
+  const errors = problems.filter((p) => p.severity === 'error');
+  if (errors.length) return { ok: false, problems: errors };
+
+  const extra: Record<string, unknown> = {};
+  for (const [key, val] of Object.entries(file)) if (!KNOWN_KEYS.has(key)) extra[key] = val;
+  const job: Job = {
+    format: FORMAT_NAME,
+    version: CURRENT_VERSION,
+    job: details,
+    rules,
+    nodes: nodes.map((n) => n.item),
+    links: links.map((l) => l.item),
+  };
+  if (Object.keys(extra).length) job.extra = extra;
+  return { ok: true, job, warnings: problems, migratedFrom };
+}

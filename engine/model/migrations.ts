@@ -1,0 +1,37 @@
+// The migration chain. Each step lifts a file object from one format version to the next.
+// Version 1 is the first published version, so the chain is empty today; loading still goes
+// through it, so the first real migration only has to be added here (with before/after fixtures).
+
+import type { Json } from './fields.js';
+
+export interface Migration {
+  from: number;
+  to: number;
+  /** What changed, in one line (shown as a load note). */
+  summary: string;
+  up(file: Json): Json;
+}
+
+export const MIGRATIONS: readonly Migration[] = [];
+
+export type MigrationOutcome =
+  | { ok: true; file: Json; migratedFrom: number | null; steps: string[] }
+  | { ok: false; message: string };
+
+/** Lift `file` (at `version`) to `target` through the chain, one step at a time. */
+export function migrate(file: Json, version: number, target: number, chain: readonly Migration[] = MIGRATIONS): MigrationOutcome {
+  let current = file;
+  let at = version;
+  const steps: string[] = [];
+  while (at < target) {
+    const step = chain.find((m) => m.from === at);
+    if (!step || step.to <= at) {
+      return { ok: false, message: `format version ${version} cannot be read: no migration from version ${at} is known (this program reads versions 1 to ${target})` };
+    }
+    current = step.up(structuredClone(current));
+    current.version = step.to;
+    steps.push(`v${step.from} → v${step.to}: ${step.summary}`);
+    at = step.to;
+  }
+  return { ok: true, file: current, migratedFrom: version === target ? null : version, steps };
+}

@@ -1,0 +1,102 @@
+// How numbers and inputs are shown on the printout and in the CSV. One place, so the diagram,
+// the schedule and the CSV agree, and a test can compare them with analyse().
+
+import type { Cable, Link } from '../model/types.js';
+import type { CircuitResult, LinkRole, Status } from '../analysis/results.js';
+
+/** Ω to 3 decimals (0.576 Ω); an impedance of 10 Ω or more to 2. */
+export function fmtOhm(v: number | null): string {
+  if (v === null) return '—';
+  return Math.abs(v) >= 10 ? v.toFixed(2) : v.toFixed(3);
+}
+
+/** A to the nearest ampere from 100 A up, else to 0.1 A. */
+export function fmtAmp(v: number | null): string {
+  if (v === null) return '—';
+  return Math.abs(v) >= 100 ? v.toFixed(0) : trimZeros(v.toFixed(1));
+}
+
+/** Seconds to 3 significant figures (0.4, 5, 0.1, 2.35). */
+export function fmtSec(v: number | null): string {
+  if (v === null) return '—';
+  return trimZeros(v >= 100 ? v.toFixed(0) : v.toPrecision(3));
+}
+
+/** Metres to 0.1 m. */
+export function fmtMetre(v: number | null): string {
+  if (v === null) return '—';
+  return trimZeros(v.toFixed(1));
+}
+
+/** The used share of the budget as a whole percentage (0.46958 → 47 %). */
+export function fmtRatio(v: number | null): string {
+  if (v === null) return '—';
+  return `${Math.round(v * 100)} %`;
+}
+
+/** A plain number as the user wrote it, without float noise. */
+export function fmtPlain(v: number): string {
+  return String(Number(v.toPrecision(10)));
+}
+
+function trimZeros(text: string): string {
+  return text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
+}
+
+/** `2.5/2.5 Cu`, `2×95/50 Al`, `16/6 Cu/Al` for a different earth material. */
+export function fmtCable(cable: Cable): string {
+  const n = cable.parallel ?? 1;
+  const mat = cable.earthMaterial !== undefined && cable.earthMaterial !== cable.material
+    ? `${cable.material}/${cable.earthMaterial}` : cable.material;
+  return `${n > 1 ? `${n}×` : ''}${fmtPlain(cable.active)}/${fmtPlain(cable.earth)} ${mat}`;
+}
+
+/** `30 mA` for a 0.03 A RCD; empty when none. */
+export function fmtRcd(link: Link): string {
+  if (link.rcd === undefined) return '';
+  const ma = link.rcd.sensitivity * 1000;
+  return ma < 1000 ? `${fmtPlain(ma)} mA` : `${fmtPlain(link.rcd.sensitivity)} A`;
+}
+
+export const ROLE_SHORT: Record<LinkRole, string> = {
+  'consumer-mains': 'mains',
+  submain: 'submain',
+  'final-subcircuit': 'final',
+};
+
+export const ROLE_LONG: Record<LinkRole, string> = {
+  'consumer-mains': 'consumer mains',
+  submain: 'submain',
+  'final-subcircuit': 'final subcircuit',
+};
+
+export const STATUS_WORD: Record<Status, string> = {
+  pass: 'PASS',
+  fail: 'FAIL',
+  rcd: 'RCD',
+  unchecked: 'UNCHECKED',
+};
+
+/** The loop figure the circuit is judged by: Zs when the source is known, else the own loop. */
+export function judgedLoop(c: CircuitResult): { label: 'Zs' | 'own'; value: number | null } {
+  if (c.method === 'known-source') return { label: 'Zs', value: c.zs };
+  return { label: 'own', value: c.own };
+}
+
+/** Failures first (fail, then rcd), then by ratio descending, unchecked last; ties in file order. */
+export function scheduleOrder(circuits: readonly CircuitResult[]): CircuitResult[] {
+  const rank: Record<Status, number> = { fail: 0, rcd: 1, pass: 2, unchecked: 3 };
+  return circuits
+    .map((c, index) => ({ c, index }))
+    .sort((a, b) => {
+      const r = rank[a.c.status] - rank[b.c.status];
+      if (r !== 0) return r;
+      if (a.c.status !== 'unchecked') {
+        const ra = a.c.ratio ?? Infinity;
+        const rb = b.c.ratio ?? Infinity;
+        if (ra !== rb) return rb - ra;
+      }
+      return a.index - b.index;
+    })
+    .map((x) => x.c);
+}
