@@ -86,9 +86,9 @@ describe('a job that cannot be read', () => {
       const run = cli('check', copy, ...args);
       expect(run.status).toBe(2);
       expect(run.stdout).toBe('');
-      expect(run.stderr).toContain('links[3] (C4): cable.length');
+      expect(run.stderr).toContain('links[2] (C4): cable.length');
       expect(run.stderr).toContain('-5');
-      expect(run.stderr).toMatch(/links\[4\] \(C5\): .*P9/);
+      expect(run.stderr).toMatch(/links\[3\] \(C5\): .*P9/);
       expect(looksLikeStackTrace(run.stderr)).toBe(false);
     }
     expect(readFileSync(copy).equals(before)).toBe(true);
