@@ -71,7 +71,7 @@ export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<
       const first = loopLinks[0]!;
       linkSite(problems, first).report(
         'to',
-        `links ${loopLinks.map((l) => l.item.id).join(', ')} form a cycle through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
+        `to ${JSON.stringify(first.item.to)} closes a cycle: links ${loopLinks.map((l) => l.item.id).join(', ')} loop through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
       );
     }
     for (const id of walk) state.set(id, 'done');
