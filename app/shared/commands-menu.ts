@@ -1,7 +1,7 @@
 // The File commands the native menu shows before the renderer has sent its own list (and keeps
 // if it never does). Their ids are the renderer registry's ids for the same commands: a click
 // sends the id on the `command` channel and the renderer runs it, calling window.loopwright.
-// The renderer's list replaces these items when it names the same ids.
+// Once a window's renderer has called setMenu, its own list is used instead of this one.
 
 import type { MenuDescriptor } from './ipc.js';
 

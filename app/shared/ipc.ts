@@ -77,7 +77,9 @@ export interface LoopwrightApi {
   /** Builds the native menu from the registry's commands. Send once at start and again whenever
    *  labels, shortcuts or enabled states change. */
   setMenu(items: MenuDescriptor[]): void;
-  /** Tells the main process whether there are unsaved changes, and the window title to show. */
+  /** Tells the main process whether there are unsaved changes (used for the close prompt and the
+   *  reuse of windows) and the job's name for the title bar, e.g. "Warehouse.lwj" or the job's title;
+   *  the main process adds the unsaved mark and " — Loopwright". Call on every change of either. */
   setDirty(dirty: boolean, title: string): void;
   /** A menu item was chosen: `id` is one of the ids from setMenu (or the fallback file commands
    *  in app/shared/commands-menu.ts before the first setMenu). Returns an unsubscribe function. */
