@@ -1,0 +1,123 @@
+// The loop breakdown of one circuit: a bar per segment (the source's Ze when known, then each
+// link from the supply) with its ohms and share of the limit, the part before the protecting
+// device marked upstream, and the total against the limit with the verdict.
+
+import { useMemo } from 'react';
+import { loopBreakdown, resolveRules, type Breakdown, type Job } from '../../../../engine/index.js';
+import { selectResult, useEditor } from '../../store/index.js';
+import { closeBreakdown } from '../actions.js';
+import { StatusBadge } from '../details/CircuitResults.js';
+import { ohms, percent } from '../format.js';
+
+function safeBreakdown(job: Job, id: string): Breakdown | null {
+  try {
+    return loopBreakdown(job, id);
+  } catch {
+    return null;
+  }
+}
+
+/** One part of the loop against its own limit (unknown-source method). */
+function Against(props: { label: string; z: number | null; limit: number | null; scale: number; field: string }) {
+  const { z, limit, scale } = props;
+  const over = z !== null && limit !== null && z > limit;
+  return (
+    <div className={over ? 'lwp-bar lwp-bar-total lwp-bar-over' : 'lwp-bar lwp-bar-total'} data-breakdown-part={props.field}>
+      <span className="lwp-bar-label">{props.label}</span>
+      <span className="lwp-bar-track" aria-hidden="true">
+        <span className="lwp-bar-fill" style={{ width: `${Math.min(100, ((z ?? 0) / scale) * 100)}%` }} />
+        {limit !== null ? <span className="lwp-bar-limit" style={{ left: `${Math.min(100, (limit / scale) * 100)}%` }} /> : null}
+      </span>
+      <span className="lwp-bar-value">
+        {ohms(z)} against {ohms(limit)}{z !== null && limit ? ` (${percent(z / limit)})` : ''}{over ? ' — over' : ''}
+      </span>
+    </div>
+  );
+}
+
+export function BreakdownView({ linkId }: { linkId: string }) {
+  const job = useEditor((s) => s.job);
+  const result = useEditor(selectResult(linkId));
+  const breakdown = useMemo(() => safeBreakdown(job, linkId), [job, linkId]);
+  if (!breakdown) return <p className="lwp-empty">No loop breakdown for {linkId}: no supply reaches it.</p>;
+  const { limit, total, segments, method } = breakdown;
+  const known = method === 'known-source';
+  const share = resolveRules(job.rules).unknownSourceShare.value;
+  // Bars share one scale: the larger of the limit and the total fills the track.
+  const scale = Math.max(limit ?? 0, total, ...segments.map((s) => s.z)) || 1;
+  const over = known && limit !== null && total > limit;
+  return (
+    <div className="lwp-breakdown-body" data-breakdown={linkId}>
+      <p className="lwp-breakdown-method">
+        {known
+          ? 'Source impedance known: the whole loop Zs is compared with the limit.'
+          : `Source unknown: the circuit from its protecting device may use ${percent(share)} of the loop budget; the drawn links before the device are tested against the rest.`}
+      </p>
+      <ol className="lwp-bars">
+        {segments.map((s) => (
+          <li key={`${s.kind}-${s.id}`} className={s.upstream ? 'lwp-bar lwp-bar-upstream' : 'lwp-bar'}
+            data-segment={s.id} data-segment-kind={s.kind} data-upstream={s.upstream ? 'true' : 'false'}
+            data-r={s.r} data-x={s.x} data-z={s.z} title={`R ${s.r.toFixed(4)} Ω, X ${s.x.toFixed(4)} Ω`}>
+            <span className="lwp-bar-label">
+              {s.label}
+              {s.upstream ? <em className="lwp-bar-tag"> upstream (before the device)</em> : null}
+            </span>
+            <span className="lwp-bar-track" aria-hidden="true">
+              <span className="lwp-bar-fill" style={{ width: `${Math.min(100, (s.z / scale) * 100)}%` }} />
+            </span>
+            <span className="lwp-bar-value">
+              {ohms(s.z)}
+              {s.share !== null ? ` · ${percent(s.share)} of limit` : ''}
+            </span>
+          </li>
+        ))}
+      </ol>
+      <div className={over ? 'lwp-bar lwp-bar-total lwp-bar-over' : 'lwp-bar lwp-bar-total'} data-breakdown-total={total}>
+        <span className="lwp-bar-label">{known ? 'Total Zs' : 'Whole drawn loop'}</span>
+        <span className="lwp-bar-track" aria-hidden="true">
+          <span className="lwp-bar-fill" style={{ width: `${Math.min(100, (total / scale) * 100)}%` }} />
+          {known && limit !== null ? <span className="lwp-bar-limit" style={{ left: `${Math.min(100, (limit / scale) * 100)}%` }} /> : null}
+        </span>
+        <span className="lwp-bar-value">
+          {known ? `${ohms(total)} against limit ${ohms(limit)}${limit ? ` (${percent(total / limit)})` : ''}` : ohms(total)}
+        </span>
+      </div>
+      {!known ? (
+        <>
+          <Against label="Own loop, from the device" z={breakdown.own} limit={limit} scale={scale} field="own" />
+          <Against label="Upstream, before the device" z={breakdown.upstream} field="upstream" scale={scale}
+            limit={limit !== null ? (limit * (1 - share)) / share : null} />
+        </>
+      ) : null}
+      <p className="lwp-breakdown-verdict">
+        Verdict: {result ? <StatusBadge status={result.status} /> : '—'}
+        {result && result.ratio !== null ? ` — ratio ${percent(result.ratio)}` : ''}
+      </p>
+      {result && result.notes.length > 0 ? (
+        <ul className="lwp-results-notes">
+          {result.notes.map((n, i) => (
+            <li key={i}>{n}</li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}
+
+export function BreakdownPanel() {
+  const linkId = useEditor((s) => s.breakdownLink);
+  const name = useEditor((s) => (s.breakdownLink ? s.job.links.find((l) => l.id === s.breakdownLink)?.name : undefined));
+  if (!linkId) return null;
+  return (
+    <section className="lwp-panel lwp-breakdown" data-panel="breakdown" aria-label={`Loop breakdown of ${linkId}`}>
+      <header className="lwp-panel-head">
+        <h2 className="lwp-panel-title">Loop breakdown: {linkId}{name ? ` — ${name}` : ''}</h2>
+        <button type="button" className="lwp-button" data-action="close-breakdown" aria-label="Close the loop breakdown"
+          onClick={closeBreakdown}>
+          ✕ Close
+        </button>
+      </header>
+      <BreakdownView linkId={linkId} />
+    </section>
+  );
+}

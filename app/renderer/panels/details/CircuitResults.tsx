@@ -1,0 +1,69 @@
+// The selected circuit's results from the engine, beside its inputs.
+
+import { selectResult, useEditor } from '../../store/index.js';
+import { showBreakdown } from '../actions.js';
+import { STATUS_LOOK, amps, metres, ohms, percent, seconds } from '../format.js';
+
+export function StatusBadge({ status }: { status: keyof typeof STATUS_LOOK }) {
+  const look = STATUS_LOOK[status];
+  return (
+    <span className={`lwp-status ${look.className}`} data-status-badge={status}>
+      <span aria-hidden="true" className="lwp-status-symbol">{look.symbol}</span> {look.word}
+    </span>
+  );
+}
+
+function Row({ label, value, field }: { label: string; value: string; field: string }) {
+  return (
+    <tr data-result={field}>
+      <th scope="row">{label}</th>
+      <td>{value}</td>
+    </tr>
+  );
+}
+
+export function CircuitResults({ linkId }: { linkId: string }) {
+  const r = useEditor(selectResult(linkId));
+  if (!r) return <section className="lwp-results" aria-label="Results"><p>No result yet for {linkId}.</p></section>;
+  const known = r.method === 'known-source';
+  return (
+    <section className="lwp-results" aria-label={`Results for ${linkId}`} data-results={linkId}>
+      <h4>Results</h4>
+      <p className="lwp-results-status">
+        <StatusBadge status={r.status} />
+        {r.ratio !== null ? <span className="lwp-results-ratio"> {percent(r.ratio)} of the limit</span> : null}
+      </p>
+      <table className="lwp-results-table">
+        <tbody>
+          <Row field="method" label="Method" value={r.method === null ? 'no supply reaches it' : known ? 'source known (Zs)' : 'source unknown (80 % share)'} />
+          <Row field="device" label="Protected by" value={r.protectedBy ? `${r.device ?? ''} on ${r.protectedBy}` : 'no device'} />
+          {known ? (
+            <Row field="zs" label="Zs at far end" value={ohms(r.zs)} />
+          ) : (
+            <>
+              <Row field="own" label="Own loop" value={ohms(r.own)} />
+              <Row field="upstream" label="Upstream loop" value={ohms(r.upstream)} />
+            </>
+          )}
+          <Row field="limit" label="Limit" value={ohms(r.limit)} />
+          <Row field="tripCurrent" label="Trip current Ia" value={amps(r.tripCurrent)} />
+          <Row field="requiredTime" label="Required time" value={seconds(r.requiredTime)} />
+          <Row field="faultCurrent" label="Fault current" value={amps(r.faultCurrent)} />
+          <Row field="clearingTime" label="Clearing time" value={seconds(r.clearingTime)} />
+          <Row field="ratio" label="Ratio" value={percent(r.ratio)} />
+          <Row field="maxLength" label="Maximum length" value={metres(r.maxLength)} />
+        </tbody>
+      </table>
+      {r.notes.length > 0 ? (
+        <ul className="lwp-results-notes" aria-label="Notes">
+          {r.notes.map((n, i) => (
+            <li key={i}>{n}</li>
+          ))}
+        </ul>
+      ) : null}
+      <button type="button" className="lwp-button" data-action="show-breakdown" onClick={() => showBreakdown(linkId)}>
+        Show loop breakdown
+      </button>
+    </section>
+  );
+}

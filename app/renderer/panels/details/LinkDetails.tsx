@@ -1,0 +1,95 @@
+// Every field of one link: identity, cable, device, RCD and required time; its results beside.
+
+import { linkRole, resolveRules, STANDARD_SIZES, type Link, type Material } from '../../../../engine/index.js';
+import { useEditor } from '../../store/index.js';
+import { editLink } from '../actions.js';
+import { NumberField, Readout, SelectField, TextField } from '../fields/fields.js';
+import { ROLE_WORD, num } from '../format.js';
+import { CircuitResults } from './CircuitResults.js';
+import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
+
+const MATERIALS: ReadonlyArray<{ value: Material; label: string }> = [
+  { value: 'Cu', label: 'copper (Cu)' },
+  { value: 'Al', label: 'aluminium (Al)' },
+];
+
+const EARTH_MATERIALS: ReadonlyArray<{ value: Material | 'same'; label: string }> = [
+  { value: 'same', label: 'same as active' },
+  ...MATERIALS,
+];
+
+/** The <datalist> of standard conductor sizes that size inputs offer first (IEC 60228). */
+export function SizeList({ id }: { id: string }) {
+  return (
+    <datalist id={id}>
+      {STANDARD_SIZES.map((s) => (
+        <option key={s} value={String(s)} />
+      ))}
+    </datalist>
+  );
+}
+
+export function sizeHint(size: number): string | undefined {
+  return STANDARD_SIZES.includes(size) ? undefined : `${size} mm² is not a standard size (IEC 60228)`;
+}
+
+const SIZES_ID = 'lwp-sizes-details';
+
+export function LinkDetails({ link }: { link: Link }) {
+  const job = useEditor((s) => s.job);
+  const id = link.id;
+  const set = (field: string) => (v: unknown) => editLink(id, field, v);
+  const cable = link.cable;
+  const rules = resolveRules(job.rules);
+  const from = job.nodes.find((n) => n.id === link.from);
+  const to = job.nodes.find((n) => n.id === link.to);
+  let role = '';
+  try {
+    role = ROLE_WORD[linkRole(job, id)] ?? '';
+  } catch {
+    role = '';
+  }
+
+  return (
+    <div className="lwp-details-body" data-details-link={id}>
+      <div className="lwp-details-inputs">
+        <h3 className="lwp-details-title">Link {id}{link.name ? ` — ${link.name}` : ''}</h3>
+        <SizeList id={SIZES_ID} />
+        <fieldset className="lwp-group" data-group="identity">
+          <legend>Link</legend>
+          <TextField field="id" label="Id" value={id} emptyAs="empty" onCommit={(v) => editLink(id, 'id', v ?? '', `rename ${id}`)} />
+          <Readout label="From → to">
+            {link.from}{from?.name ? ` (${from.name})` : ''} → {link.to}{to?.name ? ` (${to.name})` : ''}
+          </Readout>
+          <Readout label="Role">{role || '—'}</Readout>
+          <TextField field="name" label="Name" value={link.name} onCommit={set('name')} />
+          <TextField field="notes" label="Notes" value={link.notes} multiline onCommit={set('notes')} />
+        </fieldset>
+        <fieldset className="lwp-group" data-group="cable">
+          <legend>Cable</legend>
+          <NumberField field="cable.length" label="Length" unit="m" value={cable.length} min={0} onCommit={set('cable.length')} />
+          <SelectField field="cable.material" label="Material" value={cable.material} options={MATERIALS}
+            onCommit={set('cable.material')} />
+          <NumberField field="cable.active" label="Active conductor" unit="mm²" value={cable.active} above={0}
+            list={SIZES_ID} hint={sizeHint(cable.active)} onCommit={set('cable.active')} />
+          <NumberField field="cable.earth" label="Earth conductor" unit="mm²" value={cable.earth} above={0}
+            list={SIZES_ID} hint={sizeHint(cable.earth)} onCommit={set('cable.earth')} />
+          <SelectField field="cable.earthMaterial" label="Earth material" value={cable.earthMaterial ?? 'same'}
+            options={EARTH_MATERIALS} onCommit={(m) => editLink(id, 'cable.earthMaterial', m === 'same' ? undefined : m)} />
+          <NumberField field="cable.parallel" label="Sets in parallel" value={cable.parallel} min={1} integer optional
+            placeholder="1" onCommit={set('cable.parallel')} />
+          <NumberField field="cable.reactance" label="Reactance per conductor" unit="Ω/m" value={cable.reactance}
+            min={0} optional placeholder={`${num(rules.reactance.value, 6)} (rules)`} onCommit={set('cable.reactance')} />
+        </fieldset>
+        <DeviceEditor link={link} />
+        <RcdEditor link={link} />
+        <fieldset className="lwp-group" data-group="time">
+          <legend>Disconnection time</legend>
+          <NumberField field="requiredTime" label="Required time override" unit="s" value={link.requiredTime}
+            above={0} optional placeholder="from the basis" onCommit={set('requiredTime')} />
+        </fieldset>
+      </div>
+      <CircuitResults linkId={id} />
+    </div>
+  );
+}

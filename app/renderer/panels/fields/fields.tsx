@@ -1,0 +1,240 @@
+// The editing fields every panel uses. Each one commits on change, blur or Enter through an
+// `onCommit` that returns the store's outcome; when the edit is refused (locally or by the
+// store), the reason is shown beside the field (role=alert) and the last good value comes back.
+
+import { useEffect, useId, useState, type ReactNode } from 'react';
+import { parseNumber, showNumber, type NumberRule } from './parse.js';
+
+export type Outcome = { ok: true } | { ok: false; reason: string; field?: string };
+
+/** `data-field` for the details and job panels; `data-cell` inside schedule rows. */
+export type HookAttr = 'data-field' | 'data-cell';
+
+interface Common {
+  /** Dotted path in the job format, e.g. `cable.length`; used for the test hook. */
+  field: string;
+  label: string;
+  /** Hide the visible label (still the input's accessible name). */
+  compact?: boolean;
+  attr?: HookAttr;
+  hint?: ReactNode;
+  disabled?: boolean;
+}
+
+function hook(attr: HookAttr, field: string): Record<string, string> {
+  return { [attr]: field };
+}
+
+function errorHook(attr: HookAttr, field: string): Record<string, string> {
+  return { [`${attr}-error`]: field };
+}
+
+export function FieldError({ attr = 'data-field', field, error }: { attr?: HookAttr; field: string; error: string | null }) {
+  if (!error) return null;
+  return (
+    <span className="lwp-field-error" role="alert" {...errorHook(attr, field)}>
+      {error}
+    </span>
+  );
+}
+
+function Shell(props: { label: string; compact?: boolean; inputId: string; unit?: string; hint?: ReactNode; children: ReactNode; error: ReactNode }) {
+  return (
+    <div className={props.compact ? 'lwp-field lwp-field-compact' : 'lwp-field'}>
+      {props.compact ? null : (
+        <label className="lwp-label" htmlFor={props.inputId}>
+          {props.label}
+        </label>
+      )}
+      <span className="lwp-input-wrap">
+        {props.children}
+        {props.unit && !props.compact ? <span className="lwp-unit">{props.unit}</span> : null}
+      </span>
+      {props.hint ? <span className="lwp-hint">{props.hint}</span> : null}
+      {props.error}
+    </div>
+  );
+}
+
+/** Text editing shared by number and text fields: local text, commit on blur/Enter, revert on refusal. */
+function useTextCommit(shown: string, commit: (text: string) => Outcome) {
+  const [text, setText] = useState(shown);
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => setText(shown), [shown]);
+  const run = () => {
+    if (text === shown) return;
+    const outcome = commit(text);
+    if (outcome.ok) setError(null);
+    else {
+      setError(outcome.reason);
+      setText(shown); // the last good value is kept
+    }
+  };
+  const revert = () => {
+    setText(shown);
+    setError(null);
+  };
+  return { text, setText, error, run, revert };
+}
+
+export interface NumberFieldProps extends Common, NumberRule {
+  value: number | undefined;
+  onCommit(value: number | undefined): Outcome;
+  placeholder?: string;
+  /** id of a <datalist> offering values first (standard sizes). */
+  list?: string;
+}
+
+export function NumberField(props: NumberFieldProps) {
+  const { field, label, unit, value, onCommit, attr = 'data-field' } = props;
+  const inputId = useId();
+  const shown = showNumber(value, props.scale);
+  const { text, setText, error, run, revert } = useTextCommit(shown, (t) => {
+    const parsed = parseNumber(t, props);
+    if (!parsed.ok) return { ok: false, reason: parsed.reason };
+    return onCommit(parsed.value);
+  });
+  return (
+    <Shell label={label} compact={props.compact} inputId={inputId} unit={unit} hint={props.hint}
+      error={<FieldError attr={attr} field={field} error={error} />}>
+      <input
+        id={inputId}
+        type="text"
+        inputMode="decimal"
+        className="lwp-input lwp-input-number"
+        aria-label={unit ? `${label} (${unit})` : label}
+        aria-invalid={error ? true : undefined}
+        value={text}
+        placeholder={props.placeholder}
+        list={props.list}
+        disabled={props.disabled}
+        {...hook(attr, field)}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={run}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') run();
+          else if (e.key === 'Escape') revert();
+        }}
+      />
+    </Shell>
+  );
+}
+
+export interface TextFieldProps extends Common {
+  value: string | undefined;
+  onCommit(value: string | undefined): Outcome;
+  /** Empty text clears the key (optional fields) or stores '' (job details). */
+  emptyAs?: 'undefined' | 'empty';
+  multiline?: boolean;
+  placeholder?: string;
+}
+
+export function TextField(props: TextFieldProps) {
+  const { field, label, value, onCommit, attr = 'data-field' } = props;
+  const inputId = useId();
+  const { text, setText, error, run, revert } = useTextCommit(value ?? '', (t) =>
+    onCommit(t === '' && props.emptyAs !== 'empty' ? undefined : t),
+  );
+  const common = {
+    id: inputId,
+    className: 'lwp-input',
+    'aria-label': label,
+    'aria-invalid': error ? true : undefined,
+    value: text,
+    placeholder: props.placeholder,
+    disabled: props.disabled,
+    onBlur: run,
+    ...hook(attr, field),
+  };
+  return (
+    <Shell label={label} compact={props.compact} inputId={inputId} hint={props.hint}
+      error={<FieldError attr={attr} field={field} error={error} />}>
+      {props.multiline ? (
+        <textarea {...common} rows={3} onChange={(e) => setText(e.target.value)}
+          onKeyDown={(e) => e.key === 'Escape' && revert()} />
+      ) : (
+        <input {...common} type="text" onChange={(e) => setText(e.target.value)}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') run();
+            else if (e.key === 'Escape') revert();
+          }} />
+      )}
+    </Shell>
+  );
+}
+
+export interface SelectFieldProps<T extends string> extends Common {
+  value: T;
+  options: ReadonlyArray<{ value: T; label: string }>;
+  onCommit(value: T): Outcome;
+}
+
+export function SelectField<T extends string>(props: SelectFieldProps<T>) {
+  const { field, label, value, options, onCommit, attr = 'data-field' } = props;
+  const inputId = useId();
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Shell label={label} compact={props.compact} inputId={inputId} hint={props.hint}
+      error={<FieldError attr={attr} field={field} error={error} />}>
+      <select
+        id={inputId}
+        className="lwp-input lwp-select"
+        aria-label={label}
+        value={value}
+        disabled={props.disabled}
+        {...hook(attr, field)}
+        onChange={(e) => {
+          const outcome = onCommit(e.target.value as T);
+          setError(outcome.ok ? null : outcome.reason);
+        }}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </Shell>
+  );
+}
+
+export interface CheckFieldProps extends Common {
+  value: boolean;
+  onCommit(value: boolean): Outcome;
+}
+
+export function CheckField(props: CheckFieldProps) {
+  const { field, label, value, onCommit, attr = 'data-field' } = props;
+  const inputId = useId();
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <div className="lwp-field lwp-field-check">
+      <input
+        id={inputId}
+        type="checkbox"
+        checked={value}
+        disabled={props.disabled}
+        {...hook(attr, field)}
+        onChange={(e) => {
+          const outcome = onCommit(e.target.checked);
+          setError(outcome.ok ? null : outcome.reason);
+        }}
+      />
+      <label htmlFor={inputId} className="lwp-label-check">
+        {label}
+      </label>
+      {props.hint ? <span className="lwp-hint">{props.hint}</span> : null}
+      <FieldError attr={attr} field={field} error={error} />
+    </div>
+  );
+}
+
+/** A read-only value in the same layout as the fields. */
+export function Readout({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <div className="lwp-field lwp-readout">
+      <span className="lwp-label">{label}</span>
+      <span className="lwp-readout-value">{children}</span>
+    </div>
+  );
+}

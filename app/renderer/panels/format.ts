@@ -1,0 +1,57 @@
+// Display helpers shared by the panels: numbers with units, and the status vocabulary
+// (symbol + word + colour together, never colour alone).
+
+import type { Status } from '../../../engine/index.js';
+import { STATUS_SYMBOL, STATUS_WORD } from '../sheet/labels.js';
+
+/** Ω to 3 decimals below 10 Ω, fewer above; '—' for null. */
+export function ohms(z: number | null | undefined): string {
+  if (z === null || z === undefined || !Number.isFinite(z)) return '—';
+  return `${z < 10 ? z.toFixed(3) : z < 100 ? z.toFixed(2) : z.toFixed(1)} Ω`;
+}
+
+/** A plain number, trimmed of trailing zeros, with an optional unit. */
+export function num(v: number | null | undefined, digits = 2, unit = ''): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  const text = Number(v.toFixed(digits)).toString();
+  return unit ? `${text} ${unit}` : text;
+}
+
+export function amps(v: number | null | undefined): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  return v >= 1000 ? `${num(v / 1000, 2)} kA (${Math.round(v)} A)` : `${num(v, 1)} A`;
+}
+
+export function seconds(v: number | null | undefined): string {
+  return num(v, 3, 's');
+}
+
+export function percent(ratio: number | null | undefined): string {
+  if (ratio === null || ratio === undefined || !Number.isFinite(ratio)) return '—';
+  return `${(ratio * 100).toFixed(ratio < 10 ? 1 : 0)} %`;
+}
+
+export function metres(v: number | null | undefined): string {
+  return num(v, 1, 'm');
+}
+
+export interface StatusLook {
+  symbol: string;
+  word: string;
+  /** CSS class carrying the colour; the symbol and word carry the meaning. */
+  className: string;
+}
+
+// The same symbol and word as the drawing uses, so the panels and the sheet never disagree.
+export const STATUS_LOOK: Record<Status, StatusLook> = {
+  pass: { symbol: STATUS_SYMBOL.pass, word: STATUS_WORD.pass, className: 'lwp-status-pass' },
+  fail: { symbol: STATUS_SYMBOL.fail, word: STATUS_WORD.fail, className: 'lwp-status-fail' },
+  rcd: { symbol: STATUS_SYMBOL.rcd, word: STATUS_WORD.rcd, className: 'lwp-status-rcd' },
+  unchecked: { symbol: STATUS_SYMBOL.unchecked, word: STATUS_WORD.unchecked, className: 'lwp-status-unchecked' },
+};
+
+export const ROLE_WORD: Record<string, string> = {
+  'consumer-mains': 'consumer mains',
+  submain: 'submain',
+  'final-subcircuit': 'final subcircuit',
+};

@@ -1,0 +1,134 @@
+// The circuit schedule: one row per link, sortable by any column (ratio, worst first, by
+// default), filtered by status; a row click selects the link and asks the sheet to centre it.
+// Above WINDOW_THRESHOLD rows only the rows in view are rendered.
+
+import { useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useEditor } from '../../store/index.js';
+import { SizeList } from '../details/LinkDetails.js';
+import { STATUS_LOOK } from '../format.js';
+import {
+  COLUMNS, DEFAULT_SORT, STATUS_FILTERS, countByStatus, filterRows, nextSort, sortRows,
+  type ScheduleRowData, type SortState, type StatusFilter,
+} from './columns.js';
+import { ROW_HEIGHT, ScheduleRow } from './ScheduleRow.js';
+
+export const WINDOW_THRESHOLD = 300;
+const OVERSCAN = 10;
+/** Used until the body has been measured (and under test environments that do no layout). */
+const FALLBACK_VIEW_HEIGHT = 600;
+const SIZES_ID = 'lwp-sizes-schedule';
+
+function filterLabel(f: StatusFilter): string {
+  return f === 'all' ? 'all' : `${STATUS_LOOK[f].symbol} ${STATUS_LOOK[f].word}`;
+}
+
+/** Rows in view for a scroll position: [first, last) plus overscan. */
+export function windowRange(count: number, scrollTop: number, viewHeight: number): [number, number] {
+  const first = Math.max(0, Math.floor(scrollTop / ROW_HEIGHT) - OVERSCAN);
+  const last = Math.min(count, Math.ceil((scrollTop + viewHeight) / ROW_HEIGHT) + OVERSCAN);
+  return [first, last];
+}
+
+export function SchedulePanel() {
+  const links = useEditor((s) => s.job.links);
+  const resultById = useEditor((s) => s.resultById);
+  const selectedLinks = useEditor((s) => s.selection.links);
+  const [sort, setSort] = useState<SortState>(DEFAULT_SORT);
+  const [filter, setFilter] = useState<StatusFilter>('all');
+  const [scrollTop, setScrollTop] = useState(0);
+  const [viewHeight, setViewHeight] = useState(FALLBACK_VIEW_HEIGHT);
+  const bodyRef = useRef<HTMLDivElement>(null);
+
+  const rows: ScheduleRowData[] = useMemo(
+    () => links.map((link, index) => ({ link, result: resultById[link.id], index })),
+    [links, resultById],
+  );
+  const counts = useMemo(() => countByStatus(rows), [rows]);
+  const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
+  const selected = useMemo(() => new Set(selectedLinks), [selectedLinks]);
+
+  const windowed = shown.length > WINDOW_THRESHOLD;
+  useLayoutEffect(() => {
+    const el = bodyRef.current;
+    if (!el) return;
+    const measure = () => setViewHeight(el.clientHeight > 0 ? el.clientHeight : FALLBACK_VIEW_HEIGHT);
+    measure();
+    if (typeof ResizeObserver === 'undefined') return;
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+
+  // Keep the selected row in view when the selection comes from elsewhere (the sheet).
+  const firstSelected = selectedLinks[0];
+  useLayoutEffect(() => {
+    const el = bodyRef.current;
+    if (!el || firstSelected === undefined) return;
+    const at = shown.findIndex((row) => row.link.id === firstSelected);
+    if (at < 0) return;
+    const top = at * ROW_HEIGHT;
+    if (top < el.scrollTop || top + ROW_HEIGHT > el.scrollTop + el.clientHeight) {
+      if (windowed || el.clientHeight > 0) el.scrollTop = Math.max(0, top - el.clientHeight / 2);
+    }
+  }, [firstSelected, shown, windowed]);
+
+  const [first, last] = windowed ? windowRange(shown.length, scrollTop, viewHeight) : [0, shown.length];
+  const visible = shown.slice(first, last);
+
+  return (
+    <section className="lwp-panel lwp-schedule" data-panel="schedule" aria-label="Circuit schedule">
+      <header className="lwp-panel-head">
+        <h2 className="lwp-panel-title">Circuit schedule</h2>
+        <div className="lwp-filters" role="group" aria-label="Filter by status">
+          {STATUS_FILTERS.map((f) => (
+            <button key={f} type="button" data-status-filter={f} aria-pressed={filter === f}
+              className={filter === f ? 'lwp-button lwp-filter lwp-filter-on' : 'lwp-button lwp-filter'}
+              onClick={() => setFilter(f)}>
+              {filterLabel(f)} <span className="lwp-count">({counts[f]})</span>
+            </button>
+          ))}
+        </div>
+      </header>
+      <SizeList id={SIZES_ID} />
+      <div className="lwp-schedule-body" ref={bodyRef} data-windowed={windowed ? 'true' : 'false'}
+        onScroll={(e) => setScrollTop(e.currentTarget.scrollTop)}>
+        <table className="lwp-schedule-table">
+          <thead>
+            <tr>
+              {COLUMNS.map((c) => (
+                <th key={c.key} scope="col" className={c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}
+                  aria-sort={sort.key === c.key ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none'}>
+                  <button type="button" className="lwp-sort" data-sort={c.key} title={c.title}
+                    onClick={() => setSort((s) => nextSort(s, c.key))}>
+                    {c.label}
+                    <span aria-hidden="true" className="lwp-sort-mark">
+                      {sort.key === c.key ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}
+                    </span>
+                  </button>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {first > 0 ? (
+              <tr aria-hidden="true" className="lwp-spacer" style={{ height: first * ROW_HEIGHT }}>
+                <td colSpan={COLUMNS.length} />
+              </tr>
+            ) : null}
+            {visible.map((row) => (
+              <ScheduleRow key={row.link.id} id={row.link.id} selected={selected.has(row.link.id)} sizesId={SIZES_ID} />
+            ))}
+            {last < shown.length ? (
+              <tr aria-hidden="true" className="lwp-spacer" style={{ height: (shown.length - last) * ROW_HEIGHT }}>
+                <td colSpan={COLUMNS.length} />
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+        {shown.length === 0 ? (
+          <p className="lwp-empty">{rows.length === 0 ? 'No links yet: connect two nodes on the sheet.' : `No ${filter} circuits.`}</p>
+        ) : null}
+      </div>
+    </section>
+  );
+}
