@@ -1,0 +1,52 @@
+// `npm run build`: the desktop app into dist/.
+//   dist/main/main.cjs        the main process (app/main/main.ts), esbuild, Node/CommonJS
+//   dist/preload/preload.cjs  the sandboxed preload (app/preload/preload.ts), esbuild, CommonJS
+//   dist/renderer/            the React app, `vite build` with the project's vite.config.ts
+// Flags: --no-renderer builds main and preload only (quick rebuilds while working on the shell).
+import { build as esbuild } from 'esbuild';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+
+/** Main and preload, bundled with their share of the engine; `electron` is provided at run time. */
+export async function buildShell() {
+  const common = {
+    bundle: true,
+    platform: 'node',
+    format: 'cjs',
+    target: 'node20',
+    external: ['electron'],
+    sourcemap: 'linked',
+    logLevel: 'warning',
+    absWorkingDir: root,
+    legalComments: 'none',
+  };
+  await esbuild({ ...common, entryPoints: ['app/main/main.ts'], outfile: 'dist/main/main.cjs' });
+  // The sandboxed preload may only require('electron') and a few built-ins: nothing else is external.
+  await esbuild({ ...common, entryPoints: ['app/preload/preload.ts'], outfile: 'dist/preload/preload.cjs' });
+}
+
+export async function buildRenderer() {
+  const configFile = resolve(root, 'vite.config.ts');
+  if (!existsSync(configFile)) throw new Error(`vite.config.ts is missing at ${configFile}`);
+  const { build } = await import('vite');
+  await build({ configFile, root: resolve(root, 'app/renderer'), base: './', logLevel: 'warn' });
+}
+
+export async function buildAll({ renderer = true } = {}) {
+  await buildShell();
+  if (renderer) await buildRenderer();
+}
+
+if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  const renderer = !process.argv.includes('--no-renderer');
+  buildAll({ renderer }).then(
+    () => console.log(`Built dist/main, dist/preload${renderer ? ', dist/renderer' : ''}`),
+    (error) => {
+      console.error(`Build failed: ${error instanceof Error ? error.message : String(error)}`);
+      process.exit(1);
+    },
+  );
+}
