@@ -1,0 +1,71 @@
+// Copy and paste of a selection with its subtree: copying a board copies the links and nodes
+// below it. Pasted elements get fresh ids and are offset so they do not sit on the originals.
+import type { Job, JobNode, Link } from '../../../engine/index.js';
+import { allIds, nextId, prefixFor } from '../store/ids.js';
+import type { Edit } from '../store/edits.js';
+
+export interface Clip {
+  nodes: JobNode[];
+  links: Link[];
+}
+
+/** The selected nodes with everything below them, the selected links with what they feed. */
+export function collectSubtree(job: Job, sel: { nodes: string[]; links: string[] }): Clip {
+  const children = new Map<string, Link[]>();
+  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l]);
+  const nodeIds = new Set<string>();
+  const linkIds = new Set<string>(sel.links);
+  const stack = [...sel.nodes, ...job.links.filter((l) => linkIds.has(l.id)).map((l) => l.to)];
+  while (stack.length > 0) {
+    const id = stack.pop()!;
+    if (nodeIds.has(id)) continue;
+    nodeIds.add(id);
+    for (const l of children.get(id) ?? []) {
+      linkIds.add(l.id);
+      stack.push(l.to);
+    }
+  }
+  return {
+    nodes: job.nodes.filter((n) => nodeIds.has(n.id)),
+    // A link whose feeding node is not copied is kept only if its far end is (it is dropped on paste).
+    links: job.links.filter((l) => linkIds.has(l.id)),
+  };
+}
+
+function stem(id: string, fallback: string): string {
+  const s = id.replace(/\d+$/, '');
+  return s === '' ? fallback : s;
+}
+
+/**
+ * The edit that pastes a clip into the job: ids renamed (same letters, next free number), links
+ * re-pointed, positions offset. A copied link whose feeding node is not in the clip is left out.
+ */
+export function pasteEdit(job: Job, clip: Clip, offset: { x: number; y: number }): { edit: Edit; ids: { nodes: string[]; links: string[] } } {
+  const taken = allIds(job);
+  const rename = new Map<string, string>();
+  for (const n of clip.nodes) {
+    const id = nextId(job, stem(n.id, prefixFor(n.kind)), taken);
+    taken.add(id);
+    rename.set(n.id, id);
+  }
+  const edits: Edit[] = [];
+  const nodes: string[] = [];
+  const links: string[] = [];
+  for (const n of clip.nodes) {
+    const at = n.at ?? { x: 0, y: 0 };
+    const node = { ...n, id: rename.get(n.id)!, at: { x: at.x + offset.x, y: at.y + offset.y } } as JobNode;
+    edits.push({ op: 'add-node', node });
+    nodes.push(node.id);
+  }
+  for (const l of clip.links) {
+    const from = rename.get(l.from);
+    const to = rename.get(l.to);
+    if (!from || !to) continue;
+    const id = nextId(job, stem(l.id, 'L'), taken);
+    taken.add(id);
+    edits.push({ op: 'add-link', link: { ...l, id, from, to } });
+    links.push(id);
+  }
+  return { edit: { op: 'batch', edits }, ids: { nodes, links } };
+}

@@ -1,0 +1,173 @@
+// The one command registry. The toolbar, the sheet's context menu, the keyboard and (desktop)
+// the native menu all look commands up here by id.
+import type { NodeKind } from '../../../engine/index.js';
+import { newPart, pathTo } from '../sheet/parts.js';
+import { autoArrange } from '../sheet/arrange.js';
+import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
+import type { Command, CommandContext } from './types.js';
+
+export type { Command, CommandContext } from './types.js';
+
+let clip: Clip | null = null;
+let pasteCount = 0;
+
+/** In a text field the text commands act on the field, as the platform would. */
+function textCommand(ctx: CommandContext, name: 'undo' | 'redo' | 'copy' | 'cut' | 'paste' | 'selectAll' | 'delete'): boolean {
+  if (!ctx.typing()) return false;
+  document.execCommand(name);
+  return true;
+}
+
+const any = () => true;
+const hasSelection = (s: { selection: { nodes: string[]; links: string[] } }) =>
+  s.selection.nodes.length + s.selection.links.length > 0;
+
+function addPart(kind: NodeKind): Command['run'] {
+  return (ctx) => {
+    const store = ctx.store.getState();
+    const node = newPart(store.job, kind, ctx.sheet?.cursor() ?? { x: 0, y: 0 });
+    if (store.apply({ op: 'add-node', node }, `add ${kind}`).ok) store.select({ nodes: [node.id], links: [] });
+  };
+}
+
+function copySelection(ctx: CommandContext): number {
+  const s = ctx.store.getState();
+  clip = collectSubtree(s.job, s.selection);
+  pasteCount = 0;
+  const n = clip.nodes.length + clip.links.length;
+  s.setMessage({ kind: 'info', text: `Copied ${clip.nodes.length} node(s) and ${clip.links.length} link(s)` });
+  return n;
+}
+
+export const COMMANDS: Command[] = [
+  { id: 'file.new', label: 'New Job', shortcut: 'Mod+N', group: 'file', toolbar: 'New', enabled: any, run: (ctx) => ctx.newJob() },
+  { id: 'file.open', label: 'Open…', shortcut: 'Mod+O', group: 'file', toolbar: 'Open', enabled: any, run: (ctx) => ctx.open() },
+  { id: 'file.save', label: 'Save', shortcut: 'Mod+S', group: 'file', toolbar: 'Save', separatorBefore: true, enabled: any, run: (ctx) => ctx.save(false) },
+  { id: 'file.saveAs', label: 'Save As…', shortcut: 'Mod+Shift+S', group: 'file', enabled: any, run: (ctx) => ctx.save(true) },
+  {
+    id: 'file.exportPdf', label: 'Export PDF…', shortcut: 'Mod+E', group: 'file', separatorBefore: true,
+    enabled: (_s, env) => env.desktop, run: (ctx) => ctx.exportPdf(),
+  },
+  { id: 'file.print', label: 'Print…', shortcut: 'Mod+P', group: 'file', toolbar: 'Print', enabled: any, run: (ctx) => ctx.print() },
+
+  {
+    id: 'edit.undo', label: 'Undo', shortcut: 'Mod+Z', group: 'edit', toolbar: 'Undo', enabled: (s) => s.canUndo,
+    run: (ctx) => void (textCommand(ctx, 'undo') || ctx.store.getState().undo()),
+  },
+  {
+    id: 'edit.redo', label: 'Redo', shortcut: 'Mod+Shift+Z', alternates: ['Mod+Y'], group: 'edit', toolbar: 'Redo',
+    enabled: (s) => s.canRedo, run: (ctx) => void (textCommand(ctx, 'redo') || ctx.store.getState().redo()),
+  },
+  {
+    id: 'edit.copy', label: 'Copy', shortcut: 'Mod+C', group: 'edit', separatorBefore: true, contextMenu: true, enabled: hasSelection,
+    run: (ctx) => void (textCommand(ctx, 'copy') || copySelection(ctx)),
+  },
+  {
+    id: 'edit.cut', label: 'Cut', shortcut: 'Mod+X', group: 'edit', contextMenu: true, enabled: hasSelection,
+    run: (ctx) => {
+      if (textCommand(ctx, 'cut')) return;
+      copySelection(ctx);
+      const s = ctx.store.getState();
+      s.apply({ op: 'remove', ids: [...s.selection.nodes, ...s.selection.links] }, 'cut');
+    },
+  },
+  {
+    id: 'edit.paste', label: 'Paste', shortcut: 'Mod+V', group: 'edit', contextMenu: true, enabled: () => clip !== null,
+    run: (ctx) => {
+      if (textCommand(ctx, 'paste') || !clip) return;
+      pasteCount += 1;
+      const s = ctx.store.getState();
+      const { edit, ids } = pasteEdit(s.job, clip, { x: 40 * pasteCount, y: 40 * pasteCount });
+      const outcome = s.apply(edit, 'paste');
+      if (outcome.ok) ctx.store.getState().select(ids);
+    },
+  },
+  {
+    id: 'edit.delete', label: 'Delete', shortcut: 'Delete', alternates: ['Backspace'], group: 'edit', contextMenu: true,
+    enabled: hasSelection,
+    run: (ctx) => {
+      if (textCommand(ctx, 'delete')) return;
+      const s = ctx.store.getState();
+      const ids = [...s.selection.nodes, ...s.selection.links];
+      if (ids.length > 0) s.apply({ op: 'remove', ids }, ids.length === 1 ? `delete ${ids[0]}` : `delete ${ids.length} items`);
+    },
+  },
+  {
+    id: 'edit.selectAll', label: 'Select All', shortcut: 'Mod+A', group: 'edit', separatorBefore: true, enabled: any,
+    run: (ctx) => {
+      if (textCommand(ctx, 'selectAll')) return;
+      const s = ctx.store.getState();
+      s.select({ nodes: s.job.nodes.map((n) => n.id), links: s.job.links.map((l) => l.id) });
+    },
+  },
+  { id: 'edit.find', label: 'Find…', shortcut: 'Mod+F', group: 'edit', toolbar: 'Find', enabled: any, run: (ctx) => ctx.openFind() },
+
+  {
+    id: 'insert.supply', label: 'Add Supply', shortcut: 'Alt+S', group: 'arrange', separatorBefore: true, contextMenu: true,
+    enabled: any, run: addPart('supply'),
+  },
+  { id: 'insert.board', label: 'Add Board', shortcut: 'Alt+B', group: 'arrange', contextMenu: true, enabled: any, run: addPart('board') },
+  { id: 'insert.point', label: 'Add Point', shortcut: 'Alt+P', group: 'arrange', contextMenu: true, enabled: any, run: addPart('point') },
+  {
+    id: 'arrange.auto', label: 'Auto-arrange', shortcut: 'Mod+Shift+L', group: 'arrange', toolbar: 'Arrange', separatorBefore: true,
+    enabled: (s) => s.job.nodes.length > 0,
+    run: async (ctx) => {
+      const s = ctx.store.getState();
+      const moves = await autoArrange(s.job);
+      if (moves.length > 0) ctx.store.getState().apply({ op: 'move', moves }, 'auto-arrange');
+      requestAnimationFrame(() => ctx.sheet?.fit());
+    },
+  },
+
+  {
+    id: 'view.fit', label: 'Zoom to Fit', shortcut: 'Shift+1', group: 'view', toolbar: 'Fit', contextMenu: true,
+    enabled: any, run: (ctx) => ctx.sheet?.fit(),
+  },
+  {
+    id: 'view.traceWorst', label: 'Trace Worst Loop', shortcut: 'Alt+W', group: 'view', toolbar: 'Worst loop',
+    separatorBefore: true, enabled: (s) => s.results.worst !== null,
+    run: (ctx) => {
+      const s = ctx.store.getState();
+      const worst = s.results.worst;
+      if (!worst) {
+        s.setMessage({ kind: 'info', text: 'No circuit is checked yet, so there is no worst loop to trace' });
+        return;
+      }
+      s.setHighlight(worst.path, worst.link);
+      s.select({ nodes: [], links: [worst.link] });
+      ctx.sheet?.centre(worst.path);
+      s.setMessage({ kind: 'info', text: `Worst loop: ${worst.link}, ${Math.round(worst.ratio * 100)} % of its limit` });
+    },
+  },
+  {
+    id: 'view.traceSelected', label: 'Trace Selected Loop', shortcut: 'Alt+T', group: 'view', contextMenu: true,
+    enabled: (s) => s.selection.links.length === 1,
+    run: (ctx) => {
+      const s = ctx.store.getState();
+      const id = s.selection.links[0];
+      if (!id) return;
+      const path = pathTo(s.job, id);
+      if (!path) {
+        s.setMessage({ kind: 'error', text: `${id} is not fed from a supply, so it has no fault loop to trace` });
+        return;
+      }
+      s.setHighlight(path, id);
+    },
+  },
+  {
+    id: 'view.clearTrace', label: 'Clear Trace', shortcut: 'Escape', group: 'view',
+    enabled: (s) => s.highlightPath !== null || s.breakdownLink !== null || hasSelection(s),
+    run: (ctx) => {
+      const s = ctx.store.getState();
+      if (s.highlightPath || s.breakdownLink) s.setHighlight(null, null);
+      else s.select({ nodes: [], links: [] });
+    },
+  },
+  { id: 'help.about', label: 'About Loopwright', shortcut: 'F1', group: 'help', enabled: any, run: (ctx) => ctx.openAbout() },
+];
+
+const byId = new Map(COMMANDS.map((c) => [c.id, c]));
+
+export function getCommand(id: string): Command | undefined {
+  return byId.get(id);
+}

@@ -1,0 +1,114 @@
+// Opening and saving jobs. Desktop: through window.loopwright (the main process shows the
+// dialogs). Browser: a file input to open, and the File System Access API or a download to save.
+import { formatProblem, parseJob, serialiseJob } from '../../../engine/index.js';
+import { useEditor } from '../store/editor.js';
+import { useUi } from '../app/ui.js';
+
+/** Asks before replacing a job with unsaved changes; asks nothing when there are none. */
+export function confirmDiscard(action: string): boolean {
+  if (!useEditor.getState().dirty) return true;
+  return window.confirm(`The job has unsaved changes. ${action} and lose them?`);
+}
+
+/** Reads a job's text into the editor, or shows every problem (nothing is replaced then). */
+export function openText(text: string, name: string, path: string | null = null): boolean {
+  const loaded = parseJob(text);
+  if (!loaded.ok) {
+    useUi.getState().showProblems(`${name} could not be opened`, loaded.problems.map(formatProblem));
+    useEditor.getState().setMessage({ kind: 'error', text: `${name} could not be opened: ${loaded.problems.length} problem(s)` });
+    return false;
+  }
+  useEditor.getState().loadJob(loaded.job, { name, path });
+  const notes: string[] = [];
+  if (loaded.migratedFrom !== null) notes.push(`migrated from format version ${loaded.migratedFrom}`);
+  if (loaded.warnings.length > 0) notes.push(`${loaded.warnings.length} warning(s): ${loaded.warnings.map(formatProblem).slice(0, 3).join('; ')}`);
+  useEditor.getState().setMessage({ kind: 'info', text: `Opened ${name}${notes.length ? ` (${notes.join('; ')})` : ''}` });
+  return true;
+}
+
+/** The file input's change handler. */
+export async function openFromInput(input: HTMLInputElement): Promise<void> {
+  const file = input.files?.[0];
+  input.value = '';
+  if (!file) return;
+  if (!confirmDiscard(`Open ${file.name}`)) return;
+  openText(await file.text(), file.name);
+}
+
+export async function openJob(): Promise<void> {
+  const api = window.loopwright;
+  if (api) {
+    if (!confirmDiscard('Open another job')) return;
+    const opened = await api.openJob();
+    if (opened) openText(opened.text, opened.name, opened.path);
+    return;
+  }
+  document.querySelector<HTMLInputElement>('input[data-open-job]')?.click();
+}
+
+function suggestedName(): string {
+  const s = useEditor.getState();
+  if (s.fileName) return s.fileName.endsWith('.lwj') ? s.fileName : `${s.fileName}.lwj`;
+  const title = s.job.job.title.trim().replace(/[^\w\- ]+/g, '').slice(0, 60).trim();
+  return `${title || 'job'}.lwj`;
+}
+
+interface WritableHandle {
+  name: string;
+  createWritable(): Promise<{ write(data: string): Promise<void>; close(): Promise<void> }>;
+}
+type SavePicker = (o: { suggestedName: string; types: Array<{ description: string; accept: Record<string, string[]> }> }) => Promise<WritableHandle>;
+
+let handle: WritableHandle | null = null;
+useEditor.subscribe((s, prev) => {
+  if (s.fileName !== prev.fileName && s.fileName !== handle?.name) handle = null;
+});
+
+export async function saveJob(saveAs: boolean): Promise<void> {
+  const s = useEditor.getState();
+  const text = serialiseJob(s.job);
+  const api = window.loopwright;
+  try {
+    if (api) {
+      const saved = await api.saveJob(text, s.filePath, saveAs);
+      if (saved) finish(s.job, saved.name, saved.path);
+      return;
+    }
+    const picker = (window as unknown as { showSaveFilePicker?: SavePicker }).showSaveFilePicker;
+    if (picker) {
+      if (saveAs || !handle) {
+        handle = await picker({ suggestedName: suggestedName(), types: [{ description: 'Loopwright job', accept: { 'application/json': ['.lwj'] } }] });
+      }
+      const w = await handle.createWritable();
+      await w.write(text);
+      await w.close();
+      finish(s.job, handle.name, null);
+      return;
+    }
+    const name = suggestedName();
+    download(text, name);
+    finish(s.job, name, null);
+  } catch (e) {
+    if (e instanceof DOMException && e.name === 'AbortError') return; // the user cancelled the picker
+    useEditor.getState().setMessage({ kind: 'error', text: `Could not save: ${e instanceof Error ? e.message : String(e)}` });
+  }
+}
+
+function finish(job: unknown, name: string, path: string | null) {
+  const s = useEditor.getState();
+  // Only what was written counts as saved (an edit made while saving stays unsaved).
+  if (s.job === job) s.markSaved({ name, path });
+  else useEditor.setState({ fileName: name, filePath: path });
+  s.setMessage({ kind: 'info', text: `Saved ${name}` });
+}
+
+export function download(text: string, name: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type: 'application/json' }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}

@@ -1,0 +1,200 @@
+// The sheet: React Flow drawing the job. Nodes and links come from the store; every change the
+// user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
+import { useCallback, useEffect, useMemo, useRef, type DragEvent, type MouseEvent as ReactMouseEvent } from 'react';
+import {
+  Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, useReactFlow,
+  type Connection, type EdgeChange, type NodeChange,
+} from '@xyflow/react';
+import { defaultLinkFor, type NodeKind } from '../../../engine/index.js';
+import { useEditor } from '../store/editor.js';
+import { nextId } from '../store/ids.js';
+import { edgeTypes } from './LinkEdge.js';
+import { nodeTypes } from './nodes.js';
+import { toFlowEdge, toFlowNode } from './flow.js';
+import { setSheetHandle } from './handle.js';
+import { newPart } from './parts.js';
+
+export const PART_MIME = 'application/x-loopwright-part';
+
+function linkPrefix(job: ReturnType<typeof useEditor.getState>['job'], from: string, to: string): string {
+  const a = job.nodes.find((n) => n.id === from);
+  const b = job.nodes.find((n) => n.id === to);
+  if (b?.kind === 'point') return 'C';
+  if (a?.kind === 'supply') return 'M';
+  return 'SM';
+}
+
+export interface SheetProps {
+  onContextMenu(at: { x: number; y: number }): void;
+}
+
+export function Sheet({ onContextMenu }: SheetProps) {
+  const jobNodes = useEditor((s) => s.job.nodes);
+  const jobLinks = useEditor((s) => s.job.links);
+  const selection = useEditor((s) => s.selection);
+  const focus = useEditor((s) => s.focus);
+  const flow = useReactFlow();
+  const cursor = useRef<{ x: number; y: number } | null>(null);
+  const wrapper = useRef<HTMLDivElement>(null);
+
+  const nodes = useMemo(() => {
+    const sel = new Set(selection.nodes);
+    return jobNodes.map((n) => toFlowNode(n, sel.has(n.id)));
+  }, [jobNodes, selection.nodes]);
+  const edges = useMemo(() => {
+    const sel = new Set(selection.links);
+    return jobLinks.map((l) => toFlowEdge(l, sel.has(l.id)));
+  }, [jobLinks, selection.links]);
+
+  const centre = useCallback(
+    (ids: string[]) => {
+      const job = useEditor.getState().job;
+      const nodeIds = new Set<string>();
+      for (const id of ids) {
+        const link = job.links.find((l) => l.id === id);
+        if (link) {
+          nodeIds.add(link.from);
+          nodeIds.add(link.to);
+        } else nodeIds.add(id);
+      }
+      if (nodeIds.size > 0) void flow.fitView({ nodes: [...nodeIds].map((id) => ({ id })), maxZoom: 1.1, padding: 0.3, duration: 250 });
+    },
+    [flow],
+  );
+
+  useEffect(() => {
+    setSheetHandle({
+      fit: () => void flow.fitView({ padding: 0.08, duration: 250 }),
+      centre,
+      cursor: () => {
+        if (cursor.current) return cursor.current;
+        const box = wrapper.current?.getBoundingClientRect();
+        return box ? flow.screenToFlowPosition({ x: box.left + box.width / 2, y: box.top + box.height / 2 }) : { x: 0, y: 0 };
+      },
+    });
+    return () => setSheetHandle(null);
+  }, [flow, centre]);
+
+  useEffect(() => {
+    if (focus) centre(focus.ids);
+  }, [focus, centre]);
+
+  const onNodesChange = useCallback((changes: NodeChange[]) => {
+    const s = useEditor.getState();
+    const live: Array<{ id: string; at: { x: number; y: number } }> = [];
+    let done = false;
+    let sel: Set<string> | null = null;
+    for (const c of changes) {
+      if (c.type === 'position' && c.position) {
+        live.push({ id: c.id, at: { x: Math.round(c.position.x), y: Math.round(c.position.y) } });
+        if (!c.dragging) done = true;
+      } else if (c.type === 'position' && c.dragging === false) {
+        done = true;
+      } else if (c.type === 'select') {
+        sel ??= new Set(s.selection.nodes);
+        if (c.selected) sel.add(c.id);
+        else sel.delete(c.id);
+      }
+    }
+    if (live.length > 0) s.moveLive(live);
+    if (done) {
+      const job = useEditor.getState().job;
+      const ids = new Set(changes.map((c) => ('id' in c ? c.id : '')));
+      const moves = job.nodes.filter((n) => ids.has(n.id)).map((n) => ({ id: n.id, at: n.at ?? { x: 0, y: 0 } }));
+      s.apply({ op: 'move', moves }, moves.length === 1 ? `move ${moves[0]!.id}` : `move ${moves.length} nodes`);
+    }
+    if (sel) s.select({ nodes: [...sel] });
+  }, []);
+
+  const onEdgesChange = useCallback((changes: EdgeChange[]) => {
+    const s = useEditor.getState();
+    let sel: Set<string> | null = null;
+    for (const c of changes) {
+      if (c.type === 'select') {
+        sel ??= new Set(s.selection.links);
+        if (c.selected) sel.add(c.id);
+        else sel.delete(c.id);
+      }
+    }
+    if (sel) s.select({ links: [...sel] });
+  }, []);
+
+  const onConnect = useCallback((c: Connection) => {
+    const s = useEditor.getState();
+    if (!c.source || !c.target) return;
+    if (c.source === c.target) {
+      s.setMessage({ kind: 'error', text: `A link cannot run from ${c.source} back to itself` });
+      return;
+    }
+    const id = nextId(s.job, linkPrefix(s.job, c.source, c.target));
+    const link = defaultLinkFor(s.job, c.source, c.target, id);
+    const outcome = s.apply({ op: 'add-link', link }, `link ${c.source} → ${c.target}`);
+    if (outcome.ok) s.select({ nodes: [], links: [id] });
+    else s.setMessage({ kind: 'error', text: `Link from ${c.source} to ${c.target} refused: ${outcome.reason}` });
+  }, []);
+
+  const onMouseMove = useCallback((e: ReactMouseEvent) => {
+    cursor.current = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+  }, [flow]);
+
+  const onDragOver = useCallback((e: DragEvent) => {
+    if (e.dataTransfer.types.includes(PART_MIME)) {
+      e.preventDefault();
+      e.dataTransfer.dropEffect = 'copy';
+    }
+  }, []);
+
+  const onDrop = useCallback((e: DragEvent) => {
+    const kind = e.dataTransfer.getData(PART_MIME) as NodeKind;
+    if (kind !== 'supply' && kind !== 'board' && kind !== 'point') return;
+    e.preventDefault();
+    const s = useEditor.getState();
+    const node = newPart(s.job, kind, flow.screenToFlowPosition({ x: e.clientX, y: e.clientY }));
+    if (s.apply({ op: 'add-node', node }, `add ${kind}`).ok) s.select({ nodes: [node.id], links: [] });
+  }, [flow]);
+
+  const contextMenu = useCallback((e: ReactMouseEvent | MouseEvent) => {
+    e.preventDefault();
+    cursor.current = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+    onContextMenu({ x: e.clientX, y: e.clientY });
+  }, [flow, onContextMenu]);
+
+  const large = jobNodes.length > 400;
+  return (
+    <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
+      <ReactFlow
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onEdgesChange={onEdgesChange}
+        onConnect={onConnect}
+        onPaneContextMenu={contextMenu}
+        onNodeContextMenu={(e, n) => {
+          if (!useEditor.getState().selection.nodes.includes(n.id)) useEditor.getState().select({ nodes: [n.id], links: [] });
+          contextMenu(e);
+        }}
+        onEdgeContextMenu={(e, ed) => {
+          if (!useEditor.getState().selection.links.includes(ed.id)) useEditor.getState().select({ nodes: [], links: [ed.id] });
+          contextMenu(e);
+        }}
+        deleteKeyCode={null}
+        selectionKeyCode="Shift"
+        multiSelectionKeyCode={['Meta', 'Control']}
+        connectionLineType={ConnectionLineType.Step}
+        connectionRadius={28}
+        onlyRenderVisibleElements={large}
+        minZoom={0.05}
+        maxZoom={3}
+        fitView
+        fitViewOptions={{ padding: 0.08 }}
+        proOptions={{ hideAttribution: true }}
+      >
+        <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
+        <Controls showInteractive={false} />
+        {!large && <MiniMap pannable zoomable nodeStrokeWidth={2} />}
+      </ReactFlow>
+    </div>
+  );
+}
