@@ -20,19 +20,26 @@ export interface WindowState {
 export const STATE_FILE = 'window-state.json';
 export const DEFAULT_SIZE = { width: 1400, height: 900 };
 export const MIN_SIZE = { width: 800, height: 560 };
-/** How much of the window's top strip must lie on a display for it to be reachable by mouse. */
+/** How much of a window must show on a display for it to count as being there. */
 const GRAB = { width: 120, height: 40 };
 
-/** Bounds that fit on one of `displays` (their work areas). A window mostly off every display is
- *  moved, at its size trimmed to fit, to the middle of the primary display (`displays[0]`). */
+/** Bounds that fit on one of `displays` (their work areas). A window keeps to the display it
+ *  overlaps most, pulled fully onto it and trimmed to its size; a window that shows less than a
+ *  grab-able strip on every display (its monitor was unplugged) is centred on the primary display
+ *  (`displays[0]`). */
 export function clampBounds(saved: Rect | null, displays: readonly Rect[]): Rect {
   const primary = displays[0] ?? { x: 0, y: 0, width: DEFAULT_SIZE.width, height: DEFAULT_SIZE.height };
   const want = saved ?? { x: NaN, y: NaN, width: DEFAULT_SIZE.width, height: DEFAULT_SIZE.height };
-  const home = displays.find((d) => {
-    const top = { x: want.x, y: want.y, width: want.width, height: Math.min(GRAB.height, want.height) };
-    const overlap = intersect(top, d);
-    return overlap !== null && overlap.width >= Math.min(GRAB.width, want.width) && overlap.height >= Math.min(GRAB.height, want.height);
-  });
+  let home: Rect | undefined;
+  let best = 0;
+  for (const d of displays) {
+    const overlap = intersect(want, d);
+    if (!overlap || overlap.width < Math.min(GRAB.width, want.width) || overlap.height < Math.min(GRAB.height, want.height)) continue;
+    if (overlap.width * overlap.height > best) {
+      best = overlap.width * overlap.height;
+      home = d;
+    }
+  }
   const area = home ?? primary;
   const width = Math.round(Math.max(Math.min(want.width, area.width), Math.min(MIN_SIZE.width, area.width)));
   const height = Math.round(Math.max(Math.min(want.height, area.height), Math.min(MIN_SIZE.height, area.height)));
