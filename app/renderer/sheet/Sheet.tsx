@@ -193,7 +193,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
         <Controls showInteractive={false} />
-        {!large && <MiniMap pannable zoomable nodeStrokeWidth={2} />}
+        {!large && <MiniMap pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
       </ReactFlow>
     </div>
   );
