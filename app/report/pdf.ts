@@ -1,0 +1,115 @@
+// jobToPdf: the printout as PDF bytes. analyse + layoutReport (the same sheets the SVG and the
+// app's print use), each sheet drawn with pdfkit, fonts embedded. Deterministic: the dates
+// and the document ID derive from the job, so the same job gives the same bytes.
+
+import PDFDocument from 'pdfkit';
+import { analyse, type Job } from '../../engine/index.js';
+import { layoutReport, type Item, type ReportOptions, type Sheet, type Stroke } from '../../engine/report/index.js';
+import { loadReportFonts, type ReportFonts } from './fonts.js';
+
+const PT_PER_MM = 72 / 25.4;
+
+export interface PdfOptions extends ReportOptions {
+  /** Fonts to embed; read from the dejavu-fonts-ttf package when absent. */
+  fonts?: ReportFonts;
+}
+
+/** The job's date (YYYY-MM-DD) at 00:00 UTC, else 2000-01-01: never the clock. */
+export function documentDate(job: Job): Date {
+  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(job.job.date.trim());
+  if (m !== null) {
+    const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
+    if (!Number.isNaN(d.getTime()) && d.getUTCFullYear() >= 1900) return d;
+  }
+  return new Date(Date.UTC(2000, 0, 1));
+}
+
+function applyStroke(doc: PDFKit.PDFDocument, s: Stroke): void {
+  doc.lineWidth(s.width).strokeColor(s.color).lineCap('round').lineJoin('round');
+  if (s.dash !== undefined) doc.dash(s.dash[0], { space: s.dash[1] });
+  else doc.undash();
+}
+
+function paint(doc: PDFKit.PDFDocument, stroke: Stroke | undefined, fill: string | undefined): void {
+  if (stroke !== undefined) applyStroke(doc, stroke);
+  if (fill !== undefined && stroke !== undefined) doc.fillAndStroke(fill, stroke.color);
+  else if (fill !== undefined) doc.fill(fill);
+  else if (stroke !== undefined) doc.stroke();
+}
+
+function drawItem(doc: PDFKit.PDFDocument, item: Item): void {
+  switch (item.kind) {
+    case 'line':
+      applyStroke(doc, item.stroke);
+      doc.moveTo(item.x1, item.y1).lineTo(item.x2, item.y2).stroke();
+      return;
+    case 'rect':
+      doc.rect(item.x, item.y, item.w, item.h);
+      paint(doc, item.stroke, item.fill);
+      return;
+    case 'circle':
+      doc.circle(item.cx, item.cy, item.r);
+      paint(doc, item.stroke, item.fill);
+      return;
+    case 'polyline': {
+      const [first, ...rest] = item.points;
+      if (first === undefined) return;
+      doc.moveTo(first[0], first[1]);
+      for (const [x, y] of rest) doc.lineTo(x, y);
+      if (item.closed === true) doc.closePath();
+      paint(doc, item.stroke, item.fill);
+      return;
+    }
+    case 'text': {
+      if (item.text === '') return;
+      doc.font(item.font === 'bold' ? 'LW-Bold' : 'LW-Regular').fontSize(item.size).fillColor(item.color ?? '#000000');
+      const width = item.anchor === 'start' ? 0 : doc.widthOfString(item.text);
+      const x = item.anchor === 'start' ? item.x : item.anchor === 'middle' ? item.x - width / 2 : item.x - width;
+      doc.text(item.text, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
+      return;
+    }
+  }
+}
+
+/** Render ready-made sheets to PDF bytes. */
+export function sheetsToPdf(sheets: Sheet[], meta: { title: string; subject: string; date: Date }, fonts: ReportFonts = loadReportFonts()): Promise<Uint8Array> {
+  const doc = new PDFDocument({
+    autoFirstPage: false,
+    compress: true,
+    font: Buffer.from(fonts.regular) as unknown as string,
+    info: {
+      Title: meta.title,
+      Subject: meta.subject,
+      Creator: 'Loopwright',
+      Producer: 'Loopwright',
+      CreationDate: meta.date,
+      ModDate: meta.date,
+    },
+  });
+  doc.registerFont('LW-Regular', Buffer.from(fonts.regular));
+  doc.registerFont('LW-Bold', Buffer.from(fonts.bold));
+  const chunks: Buffer[] = [];
+  const done = new Promise<Uint8Array>((resolve, reject) => {
+    doc.on('data', (c: Buffer) => chunks.push(c));
+    doc.on('end', () => resolve(new Uint8Array(Buffer.concat(chunks))));
+    doc.on('error', reject);
+  });
+  for (const sheet of sheets) {
+    doc.addPage({ size: [sheet.widthMm * PT_PER_MM, sheet.heightMm * PT_PER_MM], margin: 0 });
+    doc.save();
+    doc.scale(PT_PER_MM);
+    for (const item of sheet.items) drawItem(doc, item);
+    doc.restore();
+  }
+  doc.end();
+  return done;
+}
+
+/** The whole printout of a job as PDF bytes. */
+export function jobToPdf(job: Job, options: PdfOptions = {}): Promise<Uint8Array> {
+  const results = analyse(job);
+  const sheets = layoutReport(job, results, options);
+  const title = job.job.title === '' ? 'Loopwright job' : job.job.title;
+  const subject = `Fault-loop check${job.job.reference !== '' ? `, ${job.job.reference}` : ''}${job.job.revision !== '' ? ` rev ${job.job.revision}` : ''}`;
+  return sheetsToPdf(sheets, { title, subject, date: documentDate(job) }, options.fonts);
+}

@@ -1,0 +1,150 @@
+// Where the diagram goes: node positions (the user's, or a layered layout of our own), the
+// scale, and the split over sheets. Annotation text has a fixed size on paper; the scale has a
+// floor at which no two nodes' annotation blocks overlap. When the drawing does not fit one
+// sheet at that floor, it is split into tiles, one sheet each, rather than shrunk.
+
+import type { Job } from '../model/types.js';
+import type { Box } from './paper.js';
+
+/** A node's annotation block relative to its centre, mm (y down): the incoming link's label
+ *  above and to the right, the node's own name to the right. */
+export const BLOCK = { left: -6, right: 31, top: -21, bottom: 7.2 };
+/** The bus a parent's outgoing links hang from, below the parent's centre, mm. */
+export const BUS = 9;
+const PAD = 1;
+/** Largest scale, mm on paper per drawing unit: small jobs are not blown up further. */
+const MAX_SCALE = 0.35;
+/** Scale ceiling for the no-overlap floor, so stacked nodes cannot demand endless sheets. */
+const FLOOR_CAP = 2;
+/** Spacing of the automatic layout, drawing units (as the editor's). */
+const AUTO_DX = 200;
+const AUTO_DY = 170;
+
+export interface Tile {
+  col: number;
+  row: number;
+  /** Anchor range of the tile in world mm. */
+  x0: number;
+  y0: number;
+  w: number;
+  h: number;
+  /** Offset added to a world position to place it on the sheet. */
+  dx: number;
+  dy: number;
+  nodes: string[];
+}
+
+export interface DiagramPlan {
+  scale: number;
+  auto: boolean;
+  /** World positions in mm (drawing units × scale). */
+  pos: Map<string, { x: number; y: number }>;
+  tiles: Tile[];
+  tileOf: Map<string, number>;
+  area: Box;
+}
+
+/** A simple layered top-down layout: leaves side by side in tree order, parents centred. */
+export function autoPositions(job: Job): Map<string, { x: number; y: number }> {
+  const children = new Map<string, string[]>();
+  const fed = new Set<string>();
+  for (const l of job.links) {
+    fed.add(l.to);
+    const list = children.get(l.from) ?? [];
+    list.push(l.to);
+    children.set(l.from, list);
+  }
+  const pos = new Map<string, { x: number; y: number }>();
+  let slot = 0;
+  const place = (id: string, depth: number): number => {
+    if (pos.has(id)) return pos.get(id)?.x ?? 0;
+    pos.set(id, { x: 0, y: depth * AUTO_DY });
+    const kids = children.get(id) ?? [];
+    let x: number;
+    if (kids.length === 0) x = slot++ * AUTO_DX;
+    else {
+      const xs = kids.map((k) => place(k, depth + 1));
+      x = ((xs[0] ?? 0) + (xs[xs.length - 1] ?? 0)) / 2;
+    }
+    pos.set(id, { x, y: depth * AUTO_DY });
+    return x;
+  };
+  for (const n of job.nodes) if (!fed.has(n.id)) place(n.id, 0);
+  for (const n of job.nodes) if (!pos.has(n.id)) place(n.id, 0); // safety: a loop cannot load
+  return pos;
+}
+
+/** The smallest scale at which no two annotation blocks overlap. */
+function overlapFloor(points: Array<{ x: number; y: number }>): number {
+  const W = BLOCK.right - BLOCK.left + PAD;
+  const H = BUS - BLOCK.top + PAD;
+  let floor = 0;
+  const sorted = [...points].sort((a, b) => a.x - b.x);
+  for (let i = 0; i < sorted.length; i++) {
+    const a = sorted[i];
+    if (a === undefined) continue;
+    for (let j = i + 1; j < sorted.length; j++) {
+      const b = sorted[j];
+      if (b === undefined) continue;
+      const dx = b.x - a.x;
+      // Beyond this distance the pair needs less than the floor found so far.
+      if (floor > 0 && dx * floor >= W) break;
+      const dy = Math.abs(b.y - a.y);
+      const need = Math.min(dx === 0 ? Infinity : W / dx, dy === 0 ? Infinity : H / dy);
+      if (need > floor) floor = Math.min(need, FLOOR_CAP);
+      if (floor >= FLOOR_CAP) return FLOOR_CAP;
+    }
+  }
+  return floor;
+}
+
+export function planDiagram(job: Job, area: Box): DiagramPlan {
+  const auto = job.nodes.some((n) => n.at === undefined);
+  const raw = auto ? autoPositions(job) : new Map(job.nodes.map((n) => [n.id, n.at ?? { x: 0, y: 0 }]));
+  const points = [...raw.values()];
+  if (points.length === 0) return { scale: 1, auto, pos: new Map(), tiles: [], tileOf: new Map(), area };
+  const minX = Math.min(...points.map((p) => p.x));
+  const maxX = Math.max(...points.map((p) => p.x));
+  const minY = Math.min(...points.map((p) => p.y));
+  const maxY = Math.max(...points.map((p) => p.y));
+  const spanX = maxX - minX;
+  const spanY = maxY - minY;
+  const cellW = area.w - (BLOCK.right - BLOCK.left) - 2 * PAD;
+  const cellH = area.h - (BUS + 1 - BLOCK.top) - 2 * PAD;
+
+  const floor = overlapFloor(points);
+  const fit = Math.min(spanX > 0 ? cellW / spanX : Infinity, spanY > 0 ? cellH / spanY : Infinity);
+  const scale = fit >= floor ? Math.min(fit, Math.max(MAX_SCALE, floor)) : floor;
+
+  const pos = new Map<string, { x: number; y: number }>();
+  for (const [id, p] of raw) pos.set(id, { x: (p.x - minX) * scale, y: (p.y - minY) * scale });
+  const wx = spanX * scale;
+  const wy = spanY * scale;
+  const cols = Math.max(1, Math.ceil(wx / cellW - 1e-9));
+  const rows = Math.max(1, Math.ceil(wy / cellH - 1e-9));
+  const colW = cols === 1 ? wx : wx / cols;
+  const rowH = rows === 1 ? wy : wy / rows;
+
+  const grid = new Map<string, Tile>();
+  for (const n of job.nodes) {
+    const p = pos.get(n.id) ?? { x: 0, y: 0 };
+    const col = cols === 1 ? 0 : Math.min(cols - 1, Math.floor(p.x / colW));
+    const row = rows === 1 ? 0 : Math.min(rows - 1, Math.floor(p.y / rowH));
+    const key = `${row}:${col}`;
+    let tile = grid.get(key);
+    if (tile === undefined) {
+      const x0 = col * colW;
+      const y0 = row * rowH;
+      // A single tile is centred; split tiles start at the area's top left.
+      const dx = cols === 1 ? area.x + (area.w - (wx + BLOCK.right - BLOCK.left)) / 2 - BLOCK.left - x0 : area.x + PAD - BLOCK.left - x0;
+      const dy = rows === 1 ? area.y + (area.h - (wy + BUS + 1 - BLOCK.top)) / 2 - BLOCK.top - y0 : area.y + PAD - BLOCK.top - y0;
+      tile = { col, row, x0, y0, w: cols === 1 ? wx : colW, h: rows === 1 ? wy : rowH, dx, dy, nodes: [] };
+      grid.set(key, tile);
+    }
+    tile.nodes.push(n.id);
+  }
+  const tiles = [...grid.values()].sort((a, b) => a.row - b.row || a.col - b.col);
+  const tileOf = new Map<string, number>();
+  tiles.forEach((t, i) => t.nodes.forEach((id) => tileOf.set(id, i)));
+  return { scale, auto, pos, tiles, tileOf, area };
+}

@@ -1,0 +1,246 @@
+// The diagram sheets: the single-line diagram at the user's positions, each link annotated,
+// the worst fault path heavier, continuation marks where a link crosses to another sheet.
+
+import type { CircuitResult, Results } from '../analysis/results.js';
+import type { Job, JobNode, Link } from '../model/types.js';
+import {
+  arrowHead, deviceSymbol, GREY, INK, line, nodeSymbol, rcdSymbol, STATUS_COLOR, statusSymbol, stroke, SYMBOL_HALF, text,
+} from './draw.js';
+import { BLOCK, BUS, type DiagramPlan, type Tile } from './diagram-plan.js';
+import { fmtCable, fmtMetre, fmtOhm, fmtRatio, fmtRcd, judgedLoop, STATUS_WORD } from './format.js';
+import { describeSourceShort } from './sources.js';
+import { textWidth, truncate, wrap } from './text.js';
+import type { Item, Stroke } from './types.js';
+
+/** Annotation text size on paper, mm. */
+export const LABEL_TEXT = 2.2;
+const LH = 2.75;
+const LABEL_X = 2;
+const LABEL_W = BLOCK.right - LABEL_X;
+const FIRST_BASELINE = -15.1;
+
+interface Ctx {
+  job: Job;
+  plan: DiagramPlan;
+  byLink: Map<string, CircuitResult>;
+  nodes: Map<string, JobNode>;
+  children: Map<string, Link[]>;
+  worstLinks: Set<string>;
+  worstNodes: Set<string>;
+  worstEnd: string | null;
+  worstRatio: number | null;
+  u0: number;
+  /** Sheet number of diagram tile i. */
+  sheetOf: (tile: number) => number;
+}
+
+function linkStroke(ctx: Ctx, link: Link): Stroke {
+  if (ctx.worstLinks.has(link.id)) return stroke(0.9);
+  if (ctx.byLink.get(link.id)?.status === 'unchecked') return stroke(0.35, INK, [1.2, 0.8]);
+  return stroke(0.35);
+}
+
+function at(ctx: Ctx, id: string, tile: Tile): { x: number; y: number } {
+  const p = ctx.plan.pos.get(id) ?? { x: 0, y: 0 };
+  return { x: p.x + tile.dx, y: p.y + tile.dy };
+}
+
+/** The five label lines of a link, right of its drop line, above its far node at (x, y). */
+function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
+  const c = ctx.byLink.get(link.id);
+  const items: Item[] = [];
+  const lx = x + LABEL_X;
+  const base = (k: number): number => y + FIRST_BASELINE + k * LH;
+  const idW = textWidth(`${link.id} `, 'bold', LABEL_TEXT);
+  items.push(text(lx, base(0), link.id, LABEL_TEXT, 'bold'));
+  if (link.name !== undefined && link.name !== '') {
+    items.push(text(lx + idW, base(0), truncate(link.name, 'regular', LABEL_TEXT, LABEL_W - idW), LABEL_TEXT));
+  }
+  let device: string;
+  if (c === undefined || c.protectedBy === null) device = 'no protective device';
+  else if (c.protectedBy !== link.id) device = `protected by ${c.protectedBy} (${c.device ?? ''})`;
+  else device = [c.device ?? '', fmtRcd(link) !== '' ? `RCD ${fmtRcd(link)}` : ''].filter((s) => s !== '').join(' · ');
+  items.push(text(lx, base(1), truncate(device, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+  items.push(text(lx, base(2), truncate(`${fmtCable(link.cable)} · ${fmtMetre(link.cable.length)} m`, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+  if (c !== undefined) {
+    const loop = judgedLoop(c);
+    let loopText: string;
+    if (loop.value === null) loopText = c.zs !== null ? `Zs ${fmtOhm(c.zs)} Ω` : 'loop not computed';
+    else if (c.limit === null) loopText = `${loop.label} ${fmtOhm(loop.value)} Ω, no limit`;
+    else loopText = `${loop.label} ${fmtOhm(loop.value)} ${loop.value <= c.limit ? '≤' : '>'} ${fmtOhm(c.limit)} Ω`;
+    items.push(text(lx, base(3), truncate(loopText, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+    items.push(...statusSymbol(c.status, lx + 1.2, base(4) - 0.8, 2.2));
+    const word = STATUS_WORD[c.status];
+    items.push(text(lx + 3, base(4), word, LABEL_TEXT, 'bold', 'start', STATUS_COLOR[c.status]));
+    if (c.ratio !== null) {
+      const wW = textWidth(`${word} `, 'bold', LABEL_TEXT);
+      items.push(text(lx + 3 + wW, base(4), `· ${fmtRatio(c.ratio)} of limit`, LABEL_TEXT));
+    }
+  }
+  return items;
+}
+
+/** The node's symbol and its id, name and one more line to the right. */
+function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number): Item[] {
+  const items: Item[] = nodeSymbol(node.kind, x, y);
+  const nx = x + SYMBOL_HALF[node.kind].w + 1;
+  const width = x + BLOCK.right - nx;
+  const idW = textWidth(`${node.id} `, 'bold', LABEL_TEXT);
+  items.push(text(nx, y + 0.8, truncate(node.id, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
+  const name = node.name ?? '';
+  let lineNo = 1;
+  if (name !== '') {
+    const words = name.split(/\s+/).filter((w) => w !== '');
+    let first = '';
+    let used = 0;
+    for (const w of words) {
+      const candidate = first === '' ? w : `${first} ${w}`;
+      if (textWidth(candidate, 'regular', LABEL_TEXT) > width - idW) break;
+      first = candidate;
+      used++;
+    }
+    if (first !== '') items.push(text(nx + idW, y + 0.8, first, LABEL_TEXT));
+    const rest = words.slice(used).join(' ');
+    if (rest !== '') {
+      items.push(text(nx, y + 0.8 + LH, truncate(rest, 'regular', LABEL_TEXT, width), LABEL_TEXT));
+      lineNo = 2;
+    }
+  }
+  if (ctx.worstEnd === node.id) {
+    items.push(text(nx, y + 0.8 + lineNo * LH, truncate('worst fault path', 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
+  } else if (node.kind === 'supply' && lineNo < 3) {
+    items.push(text(nx, y + 0.8 + lineNo * LH, truncate(describeSourceShort(node.source, ctx.u0), 'regular', LABEL_TEXT, width), LABEL_TEXT, 'regular', 'start', GREY));
+  }
+  return items;
+}
+
+/** A continuation mark at the left or right edge of the area, above a bus at height y. */
+function edgeMark(ctx: Ctx, side: 'left' | 'right', y: number, lines: string[]): Item[] {
+  const a = ctx.plan.area;
+  const items: Item[] = [];
+  const edge = side === 'left' ? a.x : a.x + a.w;
+  const tip = side === 'left' ? edge - 0.5 : edge + 0.5;
+  items.push(arrowHead(side === 'left' ? tip + 3 : tip - 3, y, tip, y, 2.2));
+  lines.forEach((l, i) => {
+    const ty = y - 1.2 - (lines.length - 1 - i) * LH;
+    items.push(text(side === 'left' ? edge + 1 : edge - 1, ty, l, LABEL_TEXT, i === 0 ? 'bold' : 'regular', side === 'left' ? 'start' : 'end'));
+  });
+  return items;
+}
+
+function wrapList(head: string, ids: string[]): string[] {
+  return [head, ...wrap(ids.join(', '), 'regular', LABEL_TEXT, 70, 3)];
+}
+
+/** Every item of diagram tile `index` (no title block). */
+export function drawTile(ctx: Ctx, index: number): Item[] {
+  const tile = ctx.plan.tiles[index];
+  if (tile === undefined) return [];
+  const a = ctx.plan.area;
+  const items: Item[] = [];
+  const here = (id: string): boolean => ctx.plan.tileOf.get(id) === index;
+  const symbols: Item[] = [];
+  const outgoing = new Map<string, { side: 'left' | 'right'; y: number; bySheet: Map<number, string[]> }>();
+  const incoming = new Map<string, { side: 'left' | 'right'; y: number; parent: string; sheet: number }>();
+
+  for (const link of ctx.job.links) {
+    const pIn = here(link.from);
+    const cIn = here(link.to);
+    if (!pIn && !cIn) continue;
+    const st = linkStroke(ctx, link);
+    const pt = ctx.plan.tileOf.get(link.from) ?? index;
+    const ct = ctx.plan.tileOf.get(link.to) ?? index;
+    const other = ctx.plan.tiles[pIn ? ct : pt] ?? tile;
+    const pw = ctx.plan.pos.get(link.from) ?? { x: 0, y: 0 };
+    const p = { x: pw.x + tile.dx, y: pw.y + tile.dy };
+    const c = at(ctx, link.to, tile);
+    const busY = p.y + BUS;
+    const top = ctx.plan.area.y - 3.5;
+    const bottom = a.y + a.h + 3.5;
+
+    if (pIn) items.push(line(p.x, p.y + SYMBOL_HALF[ctx.nodes.get(link.from)?.kind ?? 'point'].h, p.x, busY, st));
+    if (pIn && cIn) {
+      items.push(line(p.x, busY, c.x, busY, st));
+    } else if (pIn) {
+      if (other.col !== tile.col) {
+        const side = other.col < tile.col ? 'left' : 'right';
+        items.push(line(p.x, busY, side === 'left' ? a.x : a.x + a.w - 3, busY, st));
+        const key = `${link.from}|${side}`;
+        const mark = outgoing.get(key) ?? { side, y: busY, bySheet: new Map<number, string[]>() };
+        const list = mark.bySheet.get(ctx.sheetOf(ct)) ?? [];
+        list.push(link.to);
+        mark.bySheet.set(ctx.sheetOf(ct), list);
+        outgoing.set(key, mark);
+      } else {
+        const down = other.row > tile.row;
+        const edgeY = down ? bottom - 1 : top + 1;
+        items.push(line(p.x, busY, c.x, busY, st), line(c.x, busY, c.x, edgeY, st), arrowHead(c.x, busY, c.x, down ? bottom + 1 : top - 1, 2));
+        items.push(text(c.x + 1.5, down ? bottom + 0.3 : top + 0.3, `${link.id} to ${link.to}, continued on sheet ${ctx.sheetOf(ct)}`, LABEL_TEXT, 'bold'));
+      }
+      continue;
+    }
+    // The far node is here: its drop, device, RCD and label.
+    let dropTop = busY;
+    if (!pIn) {
+      if (other.row === tile.row) {
+        const side = other.col < tile.col ? 'left' : 'right';
+        items.push(line(side === 'left' ? a.x + 3 : a.x + a.w, busY, c.x, busY, st));
+        incoming.set(`${link.from}|${side}`, { side, y: busY, parent: link.from, sheet: ctx.sheetOf(pt) });
+      } else {
+        const fromAbove = other.row < tile.row;
+        dropTop = fromAbove ? top - 1 : bottom + 1;
+        items.push(arrowHead(c.x, fromAbove ? top - 3 : bottom + 3, c.x, fromAbove ? top + 1.5 : bottom - 1.5, 2));
+        const parent = ctx.nodes.get(link.from);
+        items.push(text(c.x + 1.5, fromAbove ? top + 0.3 : bottom + 0.3, `from ${link.from}${parent?.name !== undefined ? ` ${parent.name}` : ''}, sheet ${ctx.sheetOf(pt)}`, LABEL_TEXT, 'bold'));
+      }
+    }
+    const childHalf = SYMBOL_HALF[ctx.nodes.get(link.to)?.kind ?? 'point'].h;
+    items.push(line(c.x, dropTop, c.x, c.y - childHalf, st));
+    if (link.device !== undefined) symbols.push(deviceSymbol(c.x, c.y + BLOCK.top + 2));
+    if (link.rcd !== undefined) symbols.push(rcdSymbol(c.x, c.y + BLOCK.top + 5.2));
+    symbols.push(...linkLabel(ctx, link, c.x, c.y));
+  }
+
+  for (const { side, y, bySheet } of outgoing.values()) {
+    const lines: string[] = [];
+    for (const [sheet, ids] of [...bySheet.entries()].sort((x, y2) => x[0] - y2[0])) {
+      lines.push(...wrapList(side === 'left' ? `← continued on sheet ${sheet}:` : `continued on sheet ${sheet} →`, ids));
+    }
+    items.push(...edgeMark(ctx, side, y, lines));
+  }
+  for (const { side, y, parent, sheet } of incoming.values()) {
+    const node = ctx.nodes.get(parent);
+    const name = truncate(`${parent}${node?.name !== undefined ? ` ${node.name}` : ''}`, 'regular', LABEL_TEXT, 60);
+    const head = side === 'left' ? `← from sheet ${sheet}` : `from sheet ${sheet} →`;
+    items.push(...edgeMark(ctx, side, y, [head, name]));
+  }
+  for (const id of tile.nodes) {
+    const node = ctx.nodes.get(id);
+    if (node === undefined) continue;
+    const p = at(ctx, id, tile);
+    symbols.push(...nodeBlock(ctx, node, p.x, p.y));
+  }
+  return [...items, ...symbols];
+}
+
+export function diagramContext(job: Job, results: Results, plan: DiagramPlan, sheetOf: (tile: number) => number, u0: number): Ctx {
+  const worstLinks = new Set<string>();
+  const worstNodes = new Set<string>();
+  const path = results.worst?.path ?? [];
+  path.forEach((id, i) => (i % 2 === 1 ? worstLinks : worstNodes).add(id));
+  const children = new Map<string, Link[]>();
+  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l]);
+  return {
+    job,
+    plan,
+    byLink: new Map(results.circuits.map((c) => [c.link, c])),
+    nodes: new Map(job.nodes.map((n) => [n.id, n])),
+    children,
+    worstLinks,
+    worstNodes,
+    worstEnd: path.length > 0 ? (path[path.length - 1] ?? null) : null,
+    worstRatio: results.worst?.ratio ?? null,
+    sheetOf,
+    u0,
+  };
+}
