@@ -2,9 +2,11 @@
 //   dist/main/main.cjs        the main process (app/main/main.ts), esbuild, Node/CommonJS
 //   dist/preload/preload.cjs  the sandboxed preload (app/preload/preload.ts), esbuild, CommonJS
 //   dist/renderer/            the React app, `vite build` with the project's vite.config.ts
+//   dist/fonts/               the printout's fonts (DejaVu Sans), for Print and Export PDF
 // Flags: --no-renderer builds main and preload only (quick rebuilds while working on the shell).
 import { build as esbuild } from 'esbuild';
-import { existsSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -22,10 +24,23 @@ export async function buildShell() {
     logLevel: 'warning',
     absWorkingDir: root,
     legalComments: 'none',
+    // app/report/fonts.ts checks for import.meta itself and uses require() in a CommonJS bundle.
+    logOverride: { 'empty-import-meta': 'silent' },
   };
-  await esbuild({ ...common, entryPoints: ['app/main/main.ts'], outfile: 'dist/main/main.cjs' });
+  // pdfkit reads its own data files from its package folder, so it stays a runtime dependency.
+  await esbuild({ ...common, external: ['electron', 'pdfkit'], entryPoints: ['app/main/main.ts'], outfile: 'dist/main/main.cjs' });
   // The sandboxed preload may only require('electron') and a few built-ins: nothing else is external.
   await esbuild({ ...common, entryPoints: ['app/preload/preload.ts'], outfile: 'dist/preload/preload.cjs' });
+}
+
+/** The printout fonts go with the app (the font package is a development dependency). */
+export function copyFonts() {
+  const require = createRequire(import.meta.url);
+  const out = resolve(root, 'dist/fonts');
+  mkdirSync(out, { recursive: true });
+  for (const file of ['DejaVuSans.ttf', 'DejaVuSans-Bold.ttf']) {
+    copyFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`), resolve(out, file));
+  }
 }
 
 export async function buildRenderer() {
@@ -37,6 +52,7 @@ export async function buildRenderer() {
 
 export async function buildAll({ renderer = true } = {}) {
   await buildShell();
+  copyFonts();
   if (renderer) await buildRenderer();
 }
 

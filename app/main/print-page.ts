@@ -1,0 +1,68 @@
+// The page File > Print sends to the printer: every sheet of the printout (engine/report's
+// layoutReport, the same sheets as the PDF and the command line's SVGs) inline, one per page.
+// Pure, so its shape is unit-tested. No script: the print window runs with JavaScript off.
+
+export const PRINT_CSS_FILE = 'print.css';
+export const FONT_FILES = { regular: 'DejaVuSans.ttf', bold: 'DejaVuSans-Bold.ttf' } as const;
+
+export interface PrintSheet {
+  svg: string;
+  widthMm: number;
+  heightMm: number;
+  title: string;
+}
+
+function escapeHtml(s: string): string {
+  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+}
+
+/** An SVG document made fit to sit inside HTML: no XML declaration, sized to its sheet. */
+export function inlineSvg(svg: string): string {
+  const body = svg.replace(/^\s*<\?xml[^>]*\?>\s*/, '').trim();
+  if (!body.startsWith('<svg')) throw new Error('a printout sheet is not an SVG document');
+  if (/<script|<foreignObject|\son[a-z]+\s*=/i.test(body)) throw new Error('a printout sheet contains script or HTML, which is never printed');
+  return body;
+}
+
+/** The style sheet: page size from the sheets (they are all one paper), no margins, fonts embedded. */
+export function printCss(widthMm: number, heightMm: number): string {
+  return [
+    `@font-face { font-family: 'DejaVu Sans'; src: url('${FONT_FILES.regular}'); font-weight: normal; }`,
+    `@font-face { font-family: 'DejaVu Sans'; src: url('${FONT_FILES.bold}'); font-weight: bold; }`,
+    `@page { size: ${widthMm}mm ${heightMm}mm; margin: 0; }`,
+    'html, body { margin: 0; padding: 0; background: #ffffff; }',
+    `.sheet { width: ${widthMm}mm; height: ${heightMm}mm; overflow: hidden; break-after: page; page-break-after: always; }`,
+    '.sheet:last-child { break-after: auto; page-break-after: auto; }',
+    '.sheet > svg { display: block; width: 100%; height: 100%; }',
+    '',
+  ].join('\n');
+}
+
+export function printHtml(sheets: readonly PrintSheet[], documentTitle: string, csp: string): string {
+  if (sheets.length === 0) throw new Error('the printout has no sheets');
+  const pages = sheets.map((s, i) => `<div class="sheet" aria-label="Sheet ${i + 1} of ${sheets.length}: ${escapeHtml(s.title)}">\n${inlineSvg(s.svg)}\n</div>`);
+  return [
+    '<!doctype html>',
+    '<html lang="en">',
+    '<head>',
+    '<meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="${escapeHtml(csp)}">`,
+    `<title>${escapeHtml(documentTitle)}</title>`,
+    `<link rel="stylesheet" href="${PRINT_CSS_FILE}">`,
+    '</head>',
+    '<body>',
+    ...pages,
+    '</body>',
+    '</html>',
+    '',
+  ].join('\n');
+}
+
+/** Electron's print page size, in microns, for a sheet in millimetres (portrait-wise, with the
+ *  orientation given separately as Electron expects). */
+export function printPageSize(widthMm: number, heightMm: number): { pageSize: { width: number; height: number }; landscape: boolean } {
+  const landscape = widthMm > heightMm;
+  const short = Math.round(Math.min(widthMm, heightMm) * 1000);
+  const long = Math.round(Math.max(widthMm, heightMm) * 1000);
+  return { pageSize: { width: short, height: long }, landscape };
+}
