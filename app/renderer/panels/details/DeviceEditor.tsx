@@ -10,9 +10,9 @@ type Kind = DeviceType | 'none';
 
 const KIND_OPTIONS: ReadonlyArray<{ value: Kind; label: string }> = [
   { value: 'none', label: 'no device' },
-  { value: 'mcb', label: 'circuit breaker, curve B/C/D' },
+  { value: 'mcb', label: 'breaker B/C/D' },
   { value: 'adjustable', label: 'adjustable breaker' },
-  { value: 'curve', label: 'fuse / time–current curve' },
+  { value: 'curve', label: 'fuse or curve' },
   { value: 'fixed', label: 'stated trip current' },
 ];
 

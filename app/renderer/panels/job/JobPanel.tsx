@@ -74,7 +74,7 @@ function OverrideField({ rules, o }: { rules: Rules; o: Override }) {
     <div className="lwp-override" data-override={field}>
       <NumberField field={field} label={o.label} unit={o.unit} value={value} optional above={o.above} min={o.min} max={o.max}
         placeholder={`${Number(rv.value.toPrecision(6))} (${rules.basis})`}
-        hint={rv.overridden ? `overrides the basis (${rv.source})` : rv.source}
+        hint={<span className="lwp-source" title={rv.source}>{rv.overridden ? 'overrides the basis' : `basis: ${rv.source}`}</span>}
         onCommit={(v) => setRules(withOverride(rules, o.path, v), `set ${o.label.toLowerCase()}`)} />
       {value !== undefined ? (
         <button type="button" className="lwp-button lwp-button-small" data-action="reset-override" data-reset={field}

@@ -7,7 +7,7 @@ import { selectLink, selectResult, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { StatusBadge } from '../details/CircuitResults.js';
 import { NumberField, TextField } from '../fields/fields.js';
-import { ROLE_WORD, num, ohms, percent } from '../format.js';
+import { ROLE_SHORT, ROLE_WORD, num, ohms, percent } from '../format.js';
 
 export const ROW_HEIGHT = 34;
 
@@ -44,7 +44,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       </td>
       <td>{link.from}</td>
       <td>{link.to}</td>
-      <td className="lwp-cell-role">{r ? ROLE_WORD[r.role] : '—'}</td>
+      <td className="lwp-cell-role" title={r ? ROLE_WORD[r.role] : undefined}>{r ? ROLE_SHORT[r.role] : '—'}</td>
       <td className="lwp-cell-cable">
         <NumberField compact attr="data-cell" field="cable.active" label={`Active size of ${id}`} unit="mm²" above={0}
           list={sizesId} value={link.cable.active} onCommit={set('cable.active')} />
