@@ -1,0 +1,125 @@
+// End to end in headless Chromium against the browser build: draw a job from nothing with the
+// mouse and keyboard, watch a circuit fail past its maximum length and pass again after undo,
+// and trace the worst loop with its breakdown.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startApp, stopApp, type App } from './harness.js';
+import { connect, dropPart, leaveFields, statuses, typeField } from './helpers.js';
+
+let app: App;
+beforeAll(async () => {
+  app = await startApp();
+});
+afterAll(async () => {
+  await stopApp();
+});
+
+async function newJob(page: Page) {
+  // The demo has no unsaved changes, so New asks nothing.
+  let asked = false;
+  page.once('dialog', (d) => {
+    asked = true;
+    void d.dismiss();
+  });
+  await page.click('[data-command="file.new"]');
+  await page.waitForFunction(() => document.querySelectorAll('[data-node-id]').length === 0);
+  expect(asked).toBe(false);
+}
+
+describe('drawing a job from nothing', () => {
+  it('places parts, connects them, types lengths and devices, fails past the maximum and undoes', async () => {
+    const page = await app.newPage();
+    const cspErrors: string[] = [];
+    page.on('console', (m) => {
+      if (/Content Security Policy/i.test(m.text())) cspErrors.push(m.text());
+    });
+    await newJob(page);
+
+    // A supply and a board by dragging from the palette; two points from the context menu.
+    await dropPart(page, 'supply', 0.5, 0.12);
+    await page.waitForSelector('[data-node-id="S1"]');
+    await dropPart(page, 'board', 0.5, 0.4);
+    await page.waitForSelector('[data-node-id="B1"]');
+    const sheet = (await page.locator('[data-sheet]').boundingBox())!;
+    for (const [fx, id] of [[0.3, 'P1'], [0.7, 'P2']] as const) {
+      await page.mouse.click(sheet.x + sheet.width * fx, sheet.y + sheet.height * 0.75, { button: 'right' });
+      await page.click('.lw-menu [data-command="insert.point"]');
+      await page.waitForSelector(`[data-node-id="${id}"]`);
+    }
+
+    // Links by dragging from handle to handle.
+    await connect(page, 'S1', 'B1');
+    await page.waitForSelector('[data-link-id="M1"]', { state: 'attached' });
+    await connect(page, 'B1', 'P1');
+    await page.waitForSelector('[data-link-id="C1"]', { state: 'attached' });
+    await connect(page, 'B1', 'P2');
+    await page.waitForSelector('[data-link-id="C2"]', { state: 'attached' });
+
+    // The radial rule while drawing: a second feeder into P1 is refused, with the reason.
+    await connect(page, 'S1', 'P1');
+    await expect.poll(() => page.textContent('[data-message]')).toMatch(/refused.*P1.*already fed by link "C1"/);
+    expect(await page.locator('[data-link-id]').count()).toBe(3);
+
+    // Lengths and devices typed into the details panel.
+    await page.click('[data-link-label="M1"]');
+    await typeField(page, 'cable.length', '15');
+    await page.click('[data-link-label="C1"]');
+    await typeField(page, 'cable.length', '30');
+    await page.locator('.lw-right [data-field="device.type"]').selectOption('mcb');
+    await page.locator('.lw-right [data-field="device.curve"]').selectOption('C');
+    await typeField(page, 'device.rating', '16');
+    // A new socket-outlet circuit starts with a 30 mA RCD; without it a failing loop is a plain FAIL.
+    await page.locator('.lw-right [data-field="rcd"]').uncheck();
+    await expect.poll(async () => (await statuses(page)).C1).toBe('pass');
+    const label = await page.textContent('[data-link-label="C1"]');
+    expect(label).toContain('C16');
+    expect(label).toContain('2.5/2.5 Cu, 30 m');
+
+    // Past its maximum length (C16 on 2.5/2.5 Cu with the source unknown: about 85 m by the
+    // AS/NZS 3000:2018 B5.2.2 formula, less the drawn mains' share) the circuit fails.
+    await typeField(page, 'cable.length', '150');
+    await expect.poll(async () => (await statuses(page)).C1).toBe('fail');
+    expect(await page.textContent('[data-link-label="C1"]')).toContain('✗ FAIL');
+
+    // Undo from the keyboard brings it back.
+    await leaveFields(page);
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => (await statuses(page)).C1).toBe('pass');
+    await page.keyboard.press('Control+Shift+z');
+    await expect.poll(async () => (await statuses(page)).C1).toBe('fail');
+    await page.click('[data-command="edit.undo"]');
+    await expect.poll(async () => (await statuses(page)).C1).toBe('pass');
+
+    // Select all and delete from the keyboard, then undo.
+    await page.click('.lw-statusbar');
+    await leaveFields(page);
+    await page.keyboard.press('Control+a');
+    await page.keyboard.press('Delete');
+    await expect.poll(() => page.locator('[data-node-id]').count()).toBe(0);
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => page.locator('[data-node-id]').count()).toBe(4);
+    expect(cspErrors).toEqual([]);
+  });
+});
+
+describe('the worst loop', () => {
+  it('highlights the path on the sheet and opens its breakdown', async () => {
+    const page = await app.newPage();
+    await page.click('[data-command="view.traceWorst"]');
+    await page.waitForSelector('[data-breakdown-box]');
+    const worst = await page.evaluate(async () => {
+      const traced = [...document.querySelectorAll('.is-traced')].map((e) => e.getAttribute('data-node-id') ?? e.getAttribute('data-link-id') ?? e.getAttribute('data-link-label'));
+      return [...new Set(traced)];
+    });
+    // The demo's worst loop ends at W07 (assets/demo.lwj notes); its path runs S1 → M1 → MSB → SM1 → DBW → W07 → P17.
+    expect(worst.sort()).toEqual(['DBW', 'M1', 'MSB', 'P17', 'S1', 'SM1', 'W07'].sort());
+    // Highlighted by line weight and dash, not only colour.
+    const dash = await page.$eval('[data-link-id="W07"] path.react-flow__edge-path', (p) => getComputedStyle(p).strokeDasharray);
+    const width = await page.$eval('[data-link-id="W07"] path.react-flow__edge-path', (p) => parseFloat(getComputedStyle(p).strokeWidth));
+    expect(dash).not.toBe('none');
+    expect(width).toBeGreaterThanOrEqual(4);
+    const breakdown = await page.textContent('[data-breakdown-box]');
+    expect(breakdown).toContain('W07');
+    expect(breakdown).toMatch(/SM1/);
+  });
+});
