@@ -126,13 +126,13 @@ export function setWindowTitle(jw: JobWindow, name: string): void {
 }
 
 /** Sends a job to a window's renderer (the preload holds it until the page listens). */
-export function sendJob(jw: JobWindow, job: OpenedJob): void {
+export function sendJob(jw: JobWindow, job: OpenedJob, pageLoading = jw.win.webContents.isLoading()): void {
   jw.path = job.path;
   jw.pristine = false;
   jw.dirty = false;
   setWindowTitle(jw, job.name);
   const deliver = (): void => jw.win.webContents.send(CHANNELS.openFile, job);
-  if (jw.win.webContents.isLoading()) jw.win.webContents.once('did-finish-load', deliver);
+  if (pageLoading) jw.win.webContents.once('did-finish-load', deliver);
   else deliver();
 }
 
@@ -160,10 +160,11 @@ export function createJobWindow(job: OpenedJob | null): JobWindow {
   win.on('close', () => rememberState(win));
   win.on('closed', () => jobWindows.delete(id));
   for (const hook of createdHooks) hook(jw);
+  // The job goes to the page once it has loaded (the preload keeps it until the page listens).
+  if (job) sendJob(jw, job, true);
+  else setWindowTitle(jw, 'Untitled');
   if (c.own.devOrigin) void win.loadURL(`${c.own.devOrigin}/`);
   else void win.loadFile(c.indexPath);
-  if (job) sendJob(jw, job);
-  else setWindowTitle(jw, 'Untitled');
   return jw;
 }
 
