@@ -20,8 +20,11 @@ describe('help', () => {
   it('describes one command with COMMAND --help', () => {
     const run = cli('check', '--help');
     expect(run.status).toBe(0);
-    expect(run.stdout).toContain('check JOB.lwj [--json]');
-    expect(run.stdout).toContain('--json');
+    const check = COMMANDS.check;
+    expect(check).toBeDefined();
+    expect(run.stdout).toContain(`Usage: npm run --silent cli -- ${check?.usage ?? '?'}`);
+    expect(run.stdout).toMatch(/check JOB\.lwj \[--json/);
+    for (const option of check?.options ?? []) expect(run.stdout).toContain(`--${option.name}`);
     expect(run.stdout).toContain('Exit status');
   });
 });
