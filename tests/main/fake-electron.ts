@@ -3,6 +3,8 @@
 // set, dialogs shown) and lets a test answer dialogs and send IPC as a page would.
 
 import { EventEmitter } from 'node:events';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 
 type Handler = (event: unknown, ...args: unknown[]) => unknown;
 
@@ -75,8 +77,11 @@ export class BrowserWindow extends EventEmitter {
   async loadFile(file: string): Promise<void> {
     this.loaded = `file://${file}`;
   }
+  /** The text of a file:// page when it was loaded (the print page is deleted afterwards). */
+  loadedText: string | null = null;
   async loadURL(url: string): Promise<void> {
     this.loaded = url;
+    if (url.startsWith('file:')) this.loadedText = readFileSync(fileURLToPath(url), 'utf8');
     this.webContents.finishLoad(url);
   }
   setTitle(t: string): void {

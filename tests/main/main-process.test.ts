@@ -191,6 +191,46 @@ describe('the menu', () => {
   });
 });
 
+describe('printout', () => {
+  it('Export PDF writes the printout where the user chooses', async () => {
+    const target = path.join(tmp, 'yard-printout');
+    dialog.saveAnswers.push({ canceled: false, filePath: target });
+    const saved = await invoke('loopwright:export-pdf', win, demoText, { size: 'A4', orientation: 'landscape' });
+    expect(saved).toEqual({ path: `${target}.pdf`, name: 'yard-printout.pdf' });
+    const bytes = await fs.readFile(`${target}.pdf`);
+    expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    // A4 landscape is 842 × 595 pt (ISO 216: 297 × 210 mm).
+    expect(bytes.toString('latin1')).toMatch(/\/MediaBox \[0 0 841\.8[0-9]* 595\.2[0-9]*\]/);
+  });
+
+  it('Export PDF of a job with problems says so and writes nothing', async () => {
+    dialog.messages.length = 0;
+    const before = await fs.readdir(tmp);
+    expect(await invoke('loopwright:export-pdf', win, demoText.replace(/"length": [0-9.]+/, '"length": -1'))).toBeNull();
+    expect(String(dialog.messages[0]?.message)).toMatch(/cannot be exported/);
+    expect(await fs.readdir(tmp)).toEqual(before);
+  });
+
+  it('Print sends every sheet, as SVG, to the printer from a hidden window with scripts off', async () => {
+    const windows = BrowserWindow.all.length;
+    expect(await invoke('loopwright:print', win, demoText)).toBe(true);
+    const printer = BrowserWindow.all[windows];
+    if (!printer) throw new Error('no print window');
+    expect(printer.options.show).toBe(false);
+    expect(printer.options.webPreferences).toMatchObject({ javascript: false, sandbox: true, contextIsolation: true, nodeIntegration: false });
+    expect(printer.isDestroyed()).toBe(true);
+    const html = printer.loadedText ?? '';
+    const { analyse, parseJob } = await import('../../engine/index.js');
+    const { layoutReport } = await import('../../engine/report/index.js');
+    const loaded = parseJob(demoText);
+    if (!loaded.ok) throw new Error('demo does not load');
+    const sheets = layoutReport(loaded.job, analyse(loaded.job));
+    expect(html.match(/<svg /g)?.length).toBe(sheets.length);
+    expect(html).not.toMatch(/<script/i);
+    expect(printer.webContents.printed[0]).toMatchObject({ silent: false, landscape: true, pageSize: { width: 297000, height: 420000 } });
+  });
+});
+
 describe('closing', () => {
   function answerClose(reply: { dirty: boolean; text: string } | null): void {
     const request = win.webContents.sent.find((s) => s.channel === 'loopwright:close-request');
