@@ -1,11 +1,7 @@
 // Jobs for the panel tests (invented data, for tests only) and store helpers.
 
-import { cleanup } from '@testing-library/react';
-import { afterEach } from 'vitest';
 import { loadJob, type Job } from '../../../engine/index.js';
 import { useEditor } from '../../../app/renderer/store/index.js';
-
-afterEach(() => cleanup());
 
 /**
  * One supply (unknown source), a board, and four final subcircuits chosen to cover every status:

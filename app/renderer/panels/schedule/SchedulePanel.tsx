@@ -17,6 +17,8 @@ const OVERSCAN = 10;
 /** Used until the body has been measured (and under test environments that do no layout). */
 const FALLBACK_VIEW_HEIGHT = 600;
 const SIZES_ID = 'lwp-sizes-schedule';
+/** Ratio and status stay in view at the right edge while the table scrolls sideways. */
+const STICKY: Partial<Record<string, string>> = { ratio: 'lwp-sticky-ratio', status: 'lwp-sticky-status' };
 
 function filterLabel(f: StatusFilter): string {
   return f === 'all' ? 'all' : `${STATUS_LOOK[f].symbol} ${STATUS_LOOK[f].word}`;
@@ -96,7 +98,8 @@ export function SchedulePanel() {
           <thead>
             <tr>
               {COLUMNS.map((c) => (
-                <th key={c.key} scope="col" className={c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}
+                <th key={c.key} scope="col"
+                  className={`${c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}${STICKY[c.key] ? ` ${STICKY[c.key]}` : ''}`}
                   aria-sort={sort.key === c.key ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none'}>
                   <button type="button" className="lwp-sort" data-sort={c.key} title={c.title}
                     onClick={() => setSort((s) => nextSort(s, c.key))}>

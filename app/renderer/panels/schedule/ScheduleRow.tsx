@@ -65,7 +65,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
               value={link.device.rating} onCommit={set('device.rating')} />
           </>
         ) : (
-          <span className="lwp-muted">none</span>
+          <span className="lwp-muted">{r?.protectedBy && r.protectedBy !== id ? `via ${r.protectedBy}` : 'none'}</span>
         )}
       </td>
       <td>{link.rcd ? `${num(link.rcd.sensitivity * 1000, 1)} mA` : '—'}</td>
@@ -80,9 +80,9 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       <td className="lwp-num">{ohms(r?.limit)}</td>
       <td className="lwp-num">{num(r?.tripCurrent, 1)}</td>
       <td className="lwp-num">{num(r?.requiredTime, 2)}</td>
-      <td className="lwp-num lwp-cell-ratio">{percent(r?.ratio)}</td>
       <td className="lwp-num">{num(r?.maxLength, 1)}</td>
-      <td>{r ? <StatusBadge status={r.status} /> : '—'}</td>
+      <td className="lwp-num lwp-cell-ratio lwp-sticky-ratio">{percent(r?.ratio)}</td>
+      <td className="lwp-sticky-status">{r ? <StatusBadge status={r.status} /> : '—'}</td>
     </tr>
   );
 });

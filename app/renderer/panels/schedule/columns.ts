@@ -51,8 +51,8 @@ export const COLUMNS: readonly Column[] = [
   { key: 'limit', label: 'Limit Ω', title: 'The loop limit for this circuit', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.limit ?? null },
   { key: 'ia', label: 'Ia A', title: 'Trip current Ia', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.tripCurrent ?? null },
   { key: 'treq', label: 't req s', title: 'Required disconnection time', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.requiredTime ?? null },
-  { key: 'ratio', label: 'Ratio', title: 'Share of the limit used (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
   { key: 'maxLength', label: 'Max m', title: 'Maximum length for this link', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
+  { key: 'ratio', label: 'Ratio', title: 'Share of the limit used (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
   { key: 'status', label: 'Status', title: 'fail, relies on RCD, pass, unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.status] : null) },
 ];
 
