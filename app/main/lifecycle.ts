@@ -132,7 +132,7 @@ export function setupLifecycle(ctx: AppContext): { start(): Promise<void> } {
     const { dirty, title } = must(checkDirtyArgs(args));
     jw.dirty = dirty;
     if (dirty) jw.pristine = false;
-    setWindowTitle(jw, title.trim() || 'Untitled');
+    setWindowTitle(jw, title);
   });
   listen(CHANNELS.closeReply, (jw, args) => {
     const { token, reply } = must(checkCloseReplyArgs(args));

@@ -34,6 +34,9 @@ export interface MenuActions {
 
 const GROUP_LABELS: Record<MenuGroup, string> = { file: '&File', edit: '&Edit', view: '&View', arrange: '&Arrange', help: '&Help' };
 
+/** The renderer's About command, when it has one, is the About box (it shows the caution). */
+const ABOUT_COMMAND = 'help.about';
+
 /** Commands that still work with no window open (macOS keeps the app running). */
 const WINDOWLESS = new Set(['file.new', 'file.open']);
 
@@ -52,7 +55,9 @@ export function menuTemplate(inputs: MenuInputs, actions: MenuActions): MenuItem
       out.push({
         id: `command:${c.id}`,
         label: c.label,
-        ...(c.accelerator ? { accelerator: c.accelerator } : {}),
+        // The shortcut is shown but left to the page: the renderer's own keyboard handler runs it
+        // (and knows when the user is typing in a field), so a key never runs a command twice.
+        ...(c.accelerator ? { accelerator: c.accelerator, registerAccelerator: false } : {}),
         enabled: c.enabled && (!windowless || WINDOWLESS.has(c.id)),
         click: (_item, win) => actions.command(c.id, win),
       });
@@ -98,7 +103,8 @@ export function menuTemplate(inputs: MenuInputs, actions: MenuActions): MenuItem
     ...(inputs.isDev ? [{ type: 'separator' as const }, { role: 'reload' as const }, { role: 'toggleDevTools' as const }] : []),
   ];
   const about: MenuItemConstructorOptions = { id: 'main:about', label: 'About Loopwright', click: (_item, win) => actions.about(win) };
-  const help: MenuItemConstructorOptions[] = [...section(items('help')), ...(mac ? [] : [about])];
+  const ownAbout = commands.some((c) => c.id === ABOUT_COMMAND);
+  const help: MenuItemConstructorOptions[] = ownAbout ? items('help') : [...section(items('help')), ...(mac ? [] : [about])];
   const arrange = items('arrange');
 
   const template: MenuItemConstructorOptions[] = [];
@@ -169,6 +175,10 @@ const actions: MenuActions = {
   },
   about(win) {
     const jw = windowOf(win);
+    if (jw && (menus.get(jw) ?? []).some((c) => c.id === ABOUT_COMMAND && c.enabled)) {
+      jw.win.webContents.send(CHANNELS.command, ABOUT_COMMAND);
+      return;
+    }
     const options = {
       type: 'info' as const,
       title: 'About Loopwright',

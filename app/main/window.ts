@@ -117,8 +117,24 @@ export function onWindowCreated(hook: (jw: JobWindow) => void): void {
   createdHooks.push(hook);
 }
 
+/** The document's name from a title the page sent, without an app name or unsaved mark it may
+ *  have added itself ("● Yard.lwj — Loopwright" → "Yard.lwj"), so the title bar never doubles them. */
+export function documentName(title: string): string {
+  const name = title
+    .trim()
+    .replace(/\s*[—–-]\s*Loopwright$/i, '')
+    .replace(/^[●•*]\s*/, '')
+    .replace(/\s*[●•*]$/, '')
+    .trim();
+  return name || 'Untitled';
+}
+
+export function windowTitle(name: string, dirty: boolean): string {
+  return `${dirty ? '● ' : ''}${documentName(name)} — Loopwright`;
+}
+
 export function setWindowTitle(jw: JobWindow, name: string): void {
-  jw.win.setTitle(`${name}${jw.dirty ? ' •' : ''} — Loopwright`);
+  jw.win.setTitle(windowTitle(name, jw.dirty));
   if (ctx?.platform === 'darwin') {
     jw.win.setDocumentEdited(jw.dirty);
     if (jw.path) jw.win.setRepresentedFilename(jw.path);

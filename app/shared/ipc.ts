@@ -79,7 +79,8 @@ export interface LoopwrightApi {
   setMenu(items: MenuDescriptor[]): void;
   /** Tells the main process whether there are unsaved changes (used for the close prompt and the
    *  reuse of windows) and the job's name for the title bar, e.g. "Warehouse.lwj" or the job's title;
-   *  the main process adds the unsaved mark and " — Loopwright". Call on every change of either. */
+   *  the main process adds the unsaved mark and " — Loopwright" (and strips them if sent). Call on
+   *  every change of either. */
   setDirty(dirty: boolean, title: string): void;
   /** A menu item was chosen: `id` is one of the ids from setMenu (or the fallback file commands
    *  in app/shared/commands-menu.ts before the first setMenu). Returns an unsubscribe function. */

@@ -57,6 +57,21 @@ describe('menu template', () => {
     expect(items.find((i) => i.id === 'recent:0')?.label).toBe('&1 yard.lwj');
   });
 
+  it('shows command shortcuts but leaves the keys to the page, so none runs twice', () => {
+    const { actions: a } = actions();
+    const undo = flat(menuTemplate({ commands, recent: [], platform: 'linux', isDev: false }, a)).find((i) => i.id === 'command:edit.undo');
+    expect(undo).toMatchObject({ accelerator: 'CmdOrCtrl+Z', registerAccelerator: false });
+  });
+
+  it('uses the page\'s About command when it has one, else its own About box', () => {
+    const { actions: a } = actions();
+    const withAbout = [...commands, { id: 'help.about', label: 'About Loopwright', accelerator: 'F1', enabled: true, menu: 'help' as const }];
+    const items = flat(menuTemplate({ commands: withAbout, recent: [], platform: 'linux', isDev: false }, a));
+    expect(items.filter((i) => i.label === 'About Loopwright')).toHaveLength(1);
+    expect(items.some((i) => i.id === 'main:about')).toBe(false);
+    expect(flat(menuTemplate({ commands, recent: [], platform: 'linux', isDev: false }, a)).some((i) => i.id === 'main:about')).toBe(true);
+  });
+
   it('adds text-editing roles only for shortcuts no command claims', () => {
     const { actions: a } = actions();
     const roles = flat(menuTemplate({ commands, recent: [], platform: 'linux', isDev: false }, a)).map((i) => i.role);

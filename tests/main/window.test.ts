@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 
 vi.mock('electron', () => ({ BrowserWindow: class {}, screen: {}, session: {} }));
 
-const { cspFor, guardContents, navigationAllowed, webPreferencesFor, windowOpenDecision, windowOptions } = await import('../../app/main/window.js');
+const { cspFor, documentName, guardContents, navigationAllowed, webPreferencesFor, windowOpenDecision, windowOptions, windowTitle } = await import('../../app/main/window.js');
 const { CSP, devCsp } = await import('../../app/shared/csp.js');
 
 const own = { indexUrl: 'file:///app/dist/renderer/index.html', devOrigin: null };
@@ -46,6 +46,16 @@ describe('window security settings', () => {
     expect(navigationAllowed('file:///app/dist/renderer/index.html#x', own)).toBe(true);
     expect(navigationAllowed('https://example.com/', own)).toBe(false);
     expect(navigationAllowed('file:///home/ana/jobs/a.lwj', own)).toBe(false);
+  });
+});
+
+describe('window title', () => {
+  it('shows the name, the unsaved mark and the app once, whatever the page sends', () => {
+    expect(windowTitle('Yard.lwj', false)).toBe('Yard.lwj — Loopwright');
+    expect(windowTitle('Yard.lwj', true)).toBe('● Yard.lwj — Loopwright');
+    expect(windowTitle('● Yard.lwj — Loopwright', true)).toBe('● Yard.lwj — Loopwright');
+    expect(documentName('   ')).toBe('Untitled');
+    expect(documentName('Pump-house - Loopwright')).toBe('Pump-house');
   });
 });
 
