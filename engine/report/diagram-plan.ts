@@ -120,25 +120,25 @@ export function planDiagram(job: Job, area: Box): DiagramPlan {
   for (const [id, p] of raw) pos.set(id, { x: (p.x - minX) * scale, y: (p.y - minY) * scale });
   const wx = spanX * scale;
   const wy = spanY * scale;
-  const cols = Math.max(1, Math.ceil(wx / cellW - 1e-9));
-  const rows = Math.max(1, Math.ceil(wy / cellH - 1e-9));
-  const colW = cols === 1 ? wx : wx / cols;
-  const rowH = rows === 1 ? wy : wy / rows;
-
+  // Bands packed greedily over the positions actually used, so no sheet starts in empty space.
+  const xBands = bands([...pos.values()].map((p) => p.x), cellW);
+  const yBands = bands([...pos.values()].map((p) => p.y), cellH);
+  const cols = xBands.length;
+  const rows = yBands.length;
   const grid = new Map<string, Tile>();
   for (const n of job.nodes) {
     const p = pos.get(n.id) ?? { x: 0, y: 0 };
-    const col = cols === 1 ? 0 : Math.min(cols - 1, Math.floor(p.x / colW));
-    const row = rows === 1 ? 0 : Math.min(rows - 1, Math.floor(p.y / rowH));
+    const col = bandOf(xBands, p.x);
+    const row = bandOf(yBands, p.y);
     const key = `${row}:${col}`;
     let tile = grid.get(key);
     if (tile === undefined) {
-      const x0 = col * colW;
-      const y0 = row * rowH;
+      const x0 = xBands[col] ?? 0;
+      const y0 = yBands[row] ?? 0;
       // A single tile is centred; split tiles start at the area's top left.
       const dx = cols === 1 ? area.x + (area.w - (wx + BLOCK.right - BLOCK.left)) / 2 - BLOCK.left - x0 : area.x + PAD - BLOCK.left - x0;
       const dy = rows === 1 ? area.y + (area.h - (wy + BUS + 1 - BLOCK.top)) / 2 - BLOCK.top - y0 : area.y + PAD - BLOCK.top - y0;
-      tile = { col, row, x0, y0, w: cols === 1 ? wx : colW, h: rows === 1 ? wy : rowH, dx, dy, nodes: [] };
+      tile = { col, row, x0, y0, w: cellW, h: cellH, dx, dy, nodes: [] };
       grid.set(key, tile);
     }
     tile.nodes.push(n.id);
@@ -147,4 +147,21 @@ export function planDiagram(job: Job, area: Box): DiagramPlan {
   const tileOf = new Map<string, number>();
   tiles.forEach((t, i) => t.nodes.forEach((id) => tileOf.set(id, i)));
   return { scale, auto, pos, tiles, tileOf, area };
+}
+
+/** Band starts covering every value, each band at most `size` wide, packed from the smallest. */
+function bands(values: number[], size: number): number[] {
+  const sorted = [...values].sort((a, b) => a - b);
+  const starts: number[] = [];
+  for (const v of sorted) {
+    const last = starts[starts.length - 1];
+    if (last === undefined || v - last > size + 1e-9) starts.push(v);
+  }
+  return starts;
+}
+
+function bandOf(starts: number[], v: number): number {
+  let i = 0;
+  while (i + 1 < starts.length && (starts[i + 1] ?? Infinity) <= v + 1e-9) i++;
+  return i;
 }

@@ -4,8 +4,10 @@
 import type { Command } from '../command.js';
 import { check } from './check.js';
 import { demo } from './demo.js';
+import { report } from './report.js';
 
 export const COMMANDS: Readonly<Record<string, Command>> = {
   check,
   demo,
+  report,
 };
