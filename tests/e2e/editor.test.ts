@@ -123,3 +123,41 @@ describe('the worst loop', () => {
     expect(breakdown).toMatch(/SM1/);
   });
 });
+
+describe('readability of the demo', () => {
+  async function overlaps(page: Page): Promise<string[]> {
+    return page.evaluate(() => {
+      const boxes = [...document.querySelectorAll('[data-link-label], [data-node-id]')].map((e) => {
+        const r = e.getBoundingClientRect();
+        return { id: e.getAttribute('data-link-label') ?? e.getAttribute('data-node-id'), r };
+      });
+      const found: string[] = [];
+      for (let i = 0; i < boxes.length; i++) {
+        for (let j = i + 1; j < boxes.length; j++) {
+          const a = boxes[i]!.r;
+          const b = boxes[j]!.r;
+          if (a.left < b.right - 0.5 && b.left < a.right - 0.5 && a.top < b.bottom - 0.5 && b.top < a.bottom - 0.5) found.push(`${boxes[i]!.id} × ${boxes[j]!.id}`);
+        }
+      }
+      return found;
+    });
+  }
+
+  it('no link label overlaps another label or a node, as opened and after auto-arrange', async () => {
+    const page = await app.newPage();
+    expect(await page.locator('[data-link-label]').count()).toBe(23);
+    expect(await overlaps(page)).toEqual([]);
+    await page.click('[data-command="arrange.auto"]');
+    await expect.poll(() => page.evaluate(() => document.querySelector('[data-command="edit.undo"]')?.hasAttribute('disabled'))).toBe(false);
+    await page.waitForTimeout(400);
+    expect(await overlaps(page)).toEqual([]);
+    await page.screenshot({ path: 'test-results/demo-arranged.png' });
+  });
+
+  it('shows every status by symbol and word as well as colour', async () => {
+    const page = await app.newPage();
+    const words = await page.$$eval('[data-link-label]', (els) => els.map((e) => e.querySelector('.lw-label-status')?.textContent ?? ''));
+    for (const w of words) expect(w).toMatch(/^(✓ pass|✗ FAIL|⚠ RCD-reliant|○ unchecked)$/);
+    expect(new Set(words)).toEqual(new Set(['✓ pass', '✗ FAIL', '⚠ RCD-reliant', '○ unchecked']));
+  });
+});

@@ -188,7 +188,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
         minZoom={0.05}
         maxZoom={3}
         fitView
-        fitViewOptions={{ padding: 0.08 }}
+        fitViewOptions={{ padding: 0.08, minZoom: 0.5 }}
         proOptions={{ hideAttribution: true }}
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />

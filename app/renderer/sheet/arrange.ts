@@ -18,7 +18,7 @@ export async function autoArrange(job: Job): Promise<Array<{ id: string; at: { x
       'elk.layered.spacing.nodeNodeBetweenLayers': String(LABEL_HEIGHT + 56),
       'elk.spacing.nodeNode': String(LABEL_WIDTH - NODE_SIZE.point.width + 28),
       'elk.spacing.componentComponent': '80',
-      'elk.layered.nodePlacement.strategy': 'BRANDES_KOEPF',
+      'elk.layered.nodePlacement.strategy': 'NETWORK_SIMPLEX',
       'elk.layered.crossingMinimization.semiInteractive': 'true',
       'elk.edgeRouting': 'ORTHOGONAL',
     },
@@ -36,10 +36,35 @@ export async function autoArrange(job: Job): Promise<Array<{ id: string; at: { x
     edges: job.links.map((l) => ({ id: l.id, sources: [l.from], targets: [l.to] })),
   };
   const laid = await elk.layout(graph);
-  return (laid.children ?? []).map((c) => {
-    const node = job.nodes.find((n) => n.id === c.id)!;
+  const slots = new Map((laid.children ?? []).map((c) => [c.id, { x: c.x ?? 0, y: c.y ?? 0, w: c.width ?? LABEL_WIDTH }]));
+  centreParents(job, slots);
+  return job.nodes.flatMap((node) => {
+    const c = slots.get(node.id);
+    if (!c) return [];
     const size = NODE_SIZE[node.kind];
-    const slot = Math.max(size.width, LABEL_WIDTH);
-    return { id: c.id, at: { x: Math.round((c.x ?? 0) + (slot - size.width) / 2), y: Math.round(c.y ?? 0) } };
+    return [{ id: node.id, at: { x: Math.round(c.x + (c.w - size.width) / 2), y: Math.round(c.y) } }];
   });
+}
+
+/**
+ * Tidies the layered result the way single-line diagrams are drawn: each board sits centred over
+ * the circuits it feeds, where that leaves room beside its neighbours in the same row.
+ */
+function centreParents(job: Job, slots: Map<string, { x: number; y: number; w: number }>): void {
+  const children = new Map<string, string[]>();
+  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l.to]);
+  const order = [...slots.keys()].sort((a, b) => slots.get(b)!.y - slots.get(a)!.y);
+  const gap = 24;
+  for (const id of order) {
+    const kids = (children.get(id) ?? []).map((k) => slots.get(k)).filter((k) => k !== undefined);
+    if (kids.length === 0) continue;
+    const me = slots.get(id)!;
+    const left = Math.min(...kids.map((k) => k.x + k.w / 2));
+    const right = Math.max(...kids.map((k) => k.x + k.w / 2));
+    const x = (left + right) / 2 - me.w / 2;
+    const clash = [...slots.entries()].some(
+      ([other, o]) => other !== id && Math.abs(o.y - me.y) < 1 && x < o.x + o.w + gap && o.x < x + me.w + gap,
+    );
+    if (!clash) me.x = x;
+  }
 }
