@@ -113,6 +113,17 @@ describe('details panel for a link', () => {
     expect(linkOf('C1').cable.length).toBe(12);
   });
 
+  it('shows a value changed elsewhere (undo) and drops a stale message', () => {
+    const { container } = render(<DetailsPanel />);
+    selectLink('C1');
+    typeAndEnter(field(container, 'cable.length'), '50');
+    typeAndEnter(field(container, 'cable.length'), '-1');
+    expect(fieldError(container, 'cable.length')).not.toBeNull();
+    act(() => useEditor.getState().undo());
+    expect(field(container, 'cable.length').value).toBe('32');
+    expect(fieldError(container, 'cable.length')).toBeNull();
+  });
+
   it('accepts a non-standard conductor size and says it is not standard', () => {
     const { container } = render(<DetailsPanel />);
     selectLink('C1');

@@ -60,7 +60,11 @@ function Shell(props: { label: string; compact?: boolean; inputId: string; unit?
 function useTextCommit(shown: string, commit: (text: string) => Outcome) {
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
-  useEffect(() => setText(shown), [shown]);
+  // A change from elsewhere (undo, another panel) replaces the text and any stale message.
+  useEffect(() => {
+    setText(shown);
+    setError(null);
+  }, [shown]);
   const run = () => {
     if (text === shown) return;
     const outcome = commit(text);
