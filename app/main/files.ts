@@ -163,7 +163,10 @@ export async function setupFiles(ctx: AppContext): Promise<void> {
   });
 
   handle(CHANNELS.saveJob, async (jw, args) => {
-    const { text, saveAs } = must(checkSaveArgs(args, jw.path));
+    const { text, path: named, saveAs } = must(checkSaveArgs(args, jw.path));
+    // No path: the page's job is untitled (e.g. after New Job in this window), so the window no
+    // longer stands for its old file and Save asks for a name.
+    if (named === null) jw.path = null;
     return saveForWindow(jw, text, saveAs);
   });
 }
