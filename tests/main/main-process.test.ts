@@ -138,7 +138,7 @@ describe('saving and opening', () => {
     expect(String(dialog.messages[0]?.detail)).toMatch(/cable\.length/);
     dialog.saveAnswers.push({ canceled: false, filePath: bad });
     dialog.messages.length = 0;
-    expect(await invoke('loopwright:save-job', win, demoText, null, true)).toBeNull();
+    expect(await invoke('loopwright:save-job', win, demoText, path.join(tmp, 'yard.lwj'), true)).toBeNull();
     expect(String(dialog.messages[0]?.detail)).toMatch(/will not be written over/);
     expect(await fs.readFile(bad, 'utf8')).toBe(badText);
   });
