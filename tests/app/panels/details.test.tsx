@@ -103,6 +103,15 @@ describe('details panel for a link', () => {
     expect(useEditor.getState().job.links.some((l) => l.id === 'C1')).toBe(true);
   });
 
+  it('renames a link and keeps it selected', () => {
+    const { container } = render(<DetailsPanel />);
+    selectLink('C1');
+    typeAndEnter(field(container, 'id'), 'K1');
+    expect(useEditor.getState().selection.links).toEqual(['K1']);
+    expect(container.querySelector('[data-details-link="K1"]')).not.toBeNull();
+    expect(useEditor.getState().resultById.K1!.status).toBe('pass');
+  });
+
   it('clears the error once a good value is committed', () => {
     const { container } = render(<DetailsPanel />);
     selectLink('C1');

@@ -82,6 +82,18 @@ describe('circuit schedule', () => {
     expect(byHook(container, 'data-schedule-row', 'C3').getAttribute('aria-selected')).toBe('true');
   });
 
+  it('does not re-centre the sheet on a click into a cell of the row already selected', () => {
+    const { container } = render(<SchedulePanel />);
+    const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');
+    fireEvent.click(byHook(row, 'data-cell', 'cable.length'));
+    const seq = useEditor.getState().focus!.seq;
+    expect(useEditor.getState().selection.links).toEqual(['C1']);
+    fireEvent.click(byHook(row, 'data-cell', 'name'));
+    expect(useEditor.getState().focus!.seq).toBe(seq);
+    fireEvent.click(row.querySelector('td:nth-child(4)')!);
+    expect(useEditor.getState().focus!.seq).toBe(seq + 1);
+  });
+
   it('edits cells in place and refuses a bad value with its reason, keeping the old one', () => {
     const { container } = render(<SchedulePanel />);
     const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');

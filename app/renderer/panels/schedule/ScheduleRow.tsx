@@ -11,8 +11,15 @@ import { ROLE_SHORT, ROLE_WORD, num, ohms, percent } from '../format.js';
 
 export const ROW_HEIGHT = 34;
 
-function selectRow(id: string) {
+/**
+ * Selects the row's link and asks the sheet to centre it. A click into a cell of the row that is
+ * already selected (to edit it) keeps the view where it is.
+ */
+function selectRow(id: string, target: EventTarget | null) {
   const s = useEditor.getState();
+  const already = s.selection.nodes.length === 0 && s.selection.links.length === 1 && s.selection.links[0] === id;
+  const inControl = target instanceof Element && target.closest('input, select, textarea, button') !== null;
+  if (already && inControl) return;
   s.select({ nodes: [], links: [id] });
   s.requestFocus([id]);
 }
@@ -30,9 +37,9 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       aria-selected={selected}
       tabIndex={0}
       style={{ height: ROW_HEIGHT }}
-      onClick={() => selectRow(id)}
+      onClick={(e) => selectRow(id, e.target)}
       onKeyDown={(e) => {
-        if (e.key === 'Enter' && e.target === e.currentTarget) selectRow(id);
+        if (e.key === 'Enter' && e.target === e.currentTarget) selectRow(id, null);
       }}
     >
       <td className="lwp-cell-id">
