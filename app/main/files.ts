@@ -76,7 +76,6 @@ export async function openJobFile(file: string, into: JobWindow | null, answer: 
   if (into && isReusable(into)) {
     if (answer) {
       into.path = full;
-      into.pristine = false;
       into.dirty = false;
       setWindowTitle(into, job.name);
       return job;
@@ -138,7 +137,6 @@ export async function saveForWindow(jw: JobWindow, text: string, saveAs: boolean
     return null;
   }
   jw.path = target;
-  jw.pristine = false;
   jw.dirty = false;
   const name = path.basename(target);
   setWindowTitle(jw, name);

@@ -14,7 +14,7 @@ export function senderWindow(event: AnyEvent): JobWindow {
   const jw = jobWindowOf(event.sender);
   const frame = event.senderFrame;
   const verdict = checkSender(
-    frame ? { url: frame.url, isTopLevel: frame.parent === null && frame === event.sender.mainFrame } : null,
+    frame ? { url: frame.url, isTopLevel: frame.parent === null } : null,
     jw !== null && !jw.win.isDestroyed(),
     context().own,
   );

@@ -131,7 +131,6 @@ export function setupLifecycle(ctx: AppContext): { start(): Promise<void> } {
   listen(CHANNELS.setDirty, (jw, args) => {
     const { dirty, title } = must(checkDirtyArgs(args));
     jw.dirty = dirty;
-    if (dirty) jw.pristine = false;
     setWindowTitle(jw, title);
   });
   listen(CHANNELS.closeReply, (jw, args) => {

@@ -14,10 +14,9 @@ export interface JobWindow {
   win: BrowserWindow;
   /** The file this window opened or last saved to; null while untitled (new job, the demo). */
   path: string | null;
+  /** Unsaved changes, as the page last said (setDirty). A window with none and no file of its own
+   *  takes the next job opened instead of a new window being made (files.ts isReusable). */
   dirty: boolean;
-  /** True from the start until the user has edited or loaded something: such a window is reused
-   *  when a file is opened rather than a second window being made. */
-  pristine: boolean;
   /** Set once the user has agreed to close, so the close handler lets it through. */
   closing: boolean;
 }
@@ -144,7 +143,6 @@ export function setWindowTitle(jw: JobWindow, name: string): void {
 /** Sends a job to a window's renderer (the preload holds it until the page listens). */
 export function sendJob(jw: JobWindow, job: OpenedJob, pageLoading = jw.win.webContents.isLoading()): void {
   jw.path = job.path;
-  jw.pristine = false;
   jw.dirty = false;
   setWindowTitle(jw, job.name);
   const deliver = (): void => jw.win.webContents.send(CHANNELS.openFile, job);
@@ -165,7 +163,7 @@ export function createJobWindow(job: OpenedJob | null): JobWindow {
   const open = jobWindows.size;
   if (open > 0) bounds = cascade(bounds, open, areas.find((a) => contains(a, bounds)) ?? areas[0] ?? bounds);
   const win = new BrowserWindow(windowOptions(c.preloadPath, bounds, c.platform));
-  const jw: JobWindow = { win, path: null, dirty: false, pristine: true, closing: false };
+  const jw: JobWindow = { win, path: null, dirty: false, closing: false };
   const id = win.webContents.id;
   jobWindows.set(id, jw);
   guardContents(win.webContents, c.own);
