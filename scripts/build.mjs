@@ -12,8 +12,8 @@ import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 
-/** Main and preload, bundled with their share of the engine; `electron` is provided at run time. */
-export async function buildShell() {
+/** esbuild options for main and preload, written under `outRoot` (tests build a copy elsewhere). */
+export function shellOptions(outRoot = resolve(root, 'dist')) {
   const common = {
     bundle: true,
     platform: 'node',
@@ -27,10 +27,19 @@ export async function buildShell() {
     // app/report/fonts.ts checks for import.meta itself and uses require() in a CommonJS bundle.
     logOverride: { 'empty-import-meta': 'silent' },
   };
-  // pdfkit reads its own data files from its package folder, so it stays a runtime dependency.
-  await esbuild({ ...common, external: ['electron', 'pdfkit'], entryPoints: ['app/main/main.ts'], outfile: 'dist/main/main.cjs' });
-  // The sandboxed preload may only require('electron') and a few built-ins: nothing else is external.
-  await esbuild({ ...common, entryPoints: ['app/preload/preload.ts'], outfile: 'dist/preload/preload.cjs' });
+  return {
+    // pdfkit reads its own data files from its package folder, so it stays a runtime dependency.
+    main: { ...common, external: ['electron', 'pdfkit'], entryPoints: ['app/main/main.ts'], outfile: resolve(outRoot, 'main/main.cjs') },
+    // The sandboxed preload may only require('electron') and a few built-ins: nothing else is external.
+    preload: { ...common, entryPoints: ['app/preload/preload.ts'], outfile: resolve(outRoot, 'preload/preload.cjs') },
+  };
+}
+
+/** Main and preload, bundled with their share of the engine; `electron` is provided at run time. */
+export async function buildShell(outRoot) {
+  const options = shellOptions(outRoot);
+  await esbuild(options.main);
+  await esbuild(options.preload);
 }
 
 /** The printout fonts go with the app (the font package is a development dependency). */
