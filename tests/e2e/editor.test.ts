@@ -161,3 +161,36 @@ describe('readability of the demo', () => {
     expect(new Set(words)).toEqual(new Set(['✓ pass', '✗ FAIL', '⚠ RCD-reliant', '○ unchecked']));
   });
 });
+
+describe('moving and finding', () => {
+  it('a drag moves a node as one undo step', async () => {
+    const page = await app.newPage();
+    await page.keyboard.press('Control+f');
+    await page.fill('[data-find]', 'P05');
+    await page.keyboard.press('Enter');
+    await page.waitForTimeout(400);
+    const position = () => page.$eval('.react-flow__node[data-id="P05"]', (e) => (e as HTMLElement).style.transform);
+    const before = await position();
+    const box = (await page.locator('[data-node-id="P05"]').boundingBox())!;
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.down();
+    for (let i = 1; i <= 10; i++) await page.mouse.move(box.x + box.width / 2 + i * 6, box.y + box.height / 2 + i * 8);
+    await page.mouse.up();
+    await expect.poll(position).not.toBe(before);
+    expect(await page.textContent('[data-doc-title]')).toContain('unsaved');
+    await leaveFields(page);
+    await page.keyboard.press('Control+z');
+    await expect.poll(position).toBe(before);
+    expect(await page.textContent('[data-doc-title]')).not.toContain('unsaved');
+  });
+
+  it('find selects by name and opens that element in the details panel', async () => {
+    const page = await app.newPage();
+    await page.click('[data-command="edit.find"]');
+    await page.fill('[data-find]', 'winch');
+    await page.click('[data-find-hit]');
+    await expect.poll(() => page.textContent('.lw-right')).toContain('Hull-lift winch');
+    // Nodes come before links among equal matches: the point P14 is chosen.
+    expect(await page.$eval('[data-node-id="P14"]', (e) => e.className)).toMatch(/is-selected/);
+  });
+});

@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { analyse, parseJob, serialiseJob } from '../../engine/index.js';
 import { startApp, stopApp, type App } from './harness.js';
-import { leaveFields, statuses, typeField } from './helpers.js';
+import { findAndSelect, leaveFields, statuses, typeField } from './helpers.js';
 
 let app: App;
 let dir: string;
@@ -70,7 +70,7 @@ describe('files in the browser', () => {
 
   it('asks before opening over unsaved changes, and keeps them when the user says no', async () => {
     const page = await app.newPage();
-    await page.click('[data-link-label="C01"]');
+    await findAndSelect(page, 'C01');
     await typeField(page, 'cable.length', '41');
     await expect.poll(() => page.textContent('[data-doc-title]')).toContain('unsaved');
     const file = join(dir, 'other.lwj');
@@ -101,7 +101,7 @@ describe('files in the browser', () => {
 
   it('autosaves after an edit and offers to restore it after a reload', async () => {
     const page = await app.newPage();
-    await page.click('[data-link-label="C04"]');
+    await findAndSelect(page, 'C04');
     await typeField(page, 'cable.length', '400');
     await expect.poll(async () => (await statuses(page)).C04).toBe('fail');
     await leaveFields(page);

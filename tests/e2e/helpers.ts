@@ -42,3 +42,12 @@ export async function typeField(page: Page, field: string, value: string): Promi
 export async function leaveFields(page: Page): Promise<void> {
   await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
 }
+
+/** Selects a node or link by id through Find (which also centres it on the sheet). */
+export async function findAndSelect(page: Page, id: string): Promise<void> {
+  await leaveFields(page);
+  await page.click('[data-command="edit.find"]');
+  await page.fill('[data-find]', id);
+  await page.keyboard.press('Enter');
+  await page.waitForTimeout(350);
+}

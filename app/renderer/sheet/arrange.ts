@@ -36,7 +36,7 @@ export async function autoArrange(job: Job): Promise<Array<{ id: string; at: { x
     edges: job.links.map((l) => ({ id: l.id, sources: [l.from], targets: [l.to] })),
   };
   const laid = await elk.layout(graph);
-  const slots = new Map((laid.children ?? []).map((c) => [c.id, { x: c.x ?? 0, y: c.y ?? 0, w: c.width ?? LABEL_WIDTH }]));
+  const slots = new Map((laid.children ?? []).map((c) => [c.id, { x: c.x ?? 0, y: c.y ?? 0, w: c.width ?? LABEL_WIDTH, h: c.height ?? 0 }]));
   centreParents(job, slots);
   return job.nodes.flatMap((node) => {
     const c = slots.get(node.id);
@@ -50,7 +50,7 @@ export async function autoArrange(job: Job): Promise<Array<{ id: string; at: { x
  * Tidies the layered result the way single-line diagrams are drawn: each board sits centred over
  * the circuits it feeds, where that leaves room beside its neighbours in the same row.
  */
-function centreParents(job: Job, slots: Map<string, { x: number; y: number; w: number }>): void {
+function centreParents(job: Job, slots: Map<string, { x: number; y: number; w: number; h: number }>): void {
   const children = new Map<string, string[]>();
   for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l.to]);
   const order = [...slots.keys()].sort((a, b) => slots.get(b)!.y - slots.get(a)!.y);
@@ -63,7 +63,8 @@ function centreParents(job: Job, slots: Map<string, { x: number; y: number; w: n
     const right = Math.max(...kids.map((k) => k.x + k.w / 2));
     const x = (left + right) / 2 - me.w / 2;
     const clash = [...slots.entries()].some(
-      ([other, o]) => other !== id && Math.abs(o.y - me.y) < 1 && x < o.x + o.w + gap && o.x < x + me.w + gap,
+      ([other, o]) =>
+        other !== id && o.y < me.y + me.h + LABEL_HEIGHT && me.y < o.y + o.h + LABEL_HEIGHT && x < o.x + o.w + gap && o.x < x + me.w + gap,
     );
     if (!clash) me.x = x;
   }
