@@ -263,7 +263,6 @@ function checkText(value: unknown, what: string, max: number, allowEmpty: boolea
   if (typeof value !== 'string') return bad(`${what} must be a string, got ${typeOf(value)}`);
   if (!allowEmpty && value.trim().length === 0) return bad(`${what} must not be empty`);
   if (value.length > max) return bad(`${what} is ${value.length} characters; the most is ${max}`);
-  // eslint-disable-next-line no-control-regex
   if (/[\u0000-\u001f\u007f]/.test(value)) return bad(`${what} must not contain control characters`);
   return ok(value);
 }
