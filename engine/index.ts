@@ -17,7 +17,6 @@ export type { ResolvedRules, RuleValue } from './analysis/basis.js';
 export { resolveRules } from './analysis/basis.js';
 export { linkRole } from './analysis/network.js';
 export { deviceMark } from './analysis/devices.js';
-export const CAUTION =
-  'Loopwright is a design aid. Its results do not replace verification: every installation must be ' +
-  'inspected and tested (including measured earth-fault loop impedance) before it is put into service, ' +
-  'and local wiring rules and licensed practice govern.';
+export { CAUTION } from './caution.js';
+export type { ReportOptions, Sheet } from './report/index.js';
+export { layoutReport, sheetToSvg, scheduleCsv } from './report/index.js';

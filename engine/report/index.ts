@@ -3,7 +3,7 @@
 
 import type { Results } from '../analysis/results.js';
 import type { Job } from '../model/types.js';
-import { CAUTION } from '../index.js';
+import { CAUTION } from '../caution.js';
 import { layoutReport as layout } from './layout.js';
 import type { ReportOptions, Sheet } from './types.js';
 
