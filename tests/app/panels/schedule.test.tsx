@@ -82,6 +82,19 @@ describe('circuit schedule', () => {
     expect(byHook(container, 'data-schedule-row', 'C3').getAttribute('aria-selected')).toBe('true');
   });
 
+  it('moves the selection with the up and down arrows on a focused row', () => {
+    const { container } = render(<SchedulePanel />);
+    const c3 = byHook<HTMLElement>(container, 'data-schedule-row', 'C3'); // second in the ratio order
+    fireEvent.keyDown(c3, { key: 'ArrowDown' });
+    expect(useEditor.getState().selection.links).toEqual(['C1']);
+    fireEvent.keyDown(byHook<HTMLElement>(container, 'data-schedule-row', 'C1'), { key: 'ArrowUp' });
+    fireEvent.keyDown(byHook<HTMLElement>(container, 'data-schedule-row', 'C3'), { key: 'ArrowUp' });
+    expect(useEditor.getState().selection.links).toEqual(['C2']);
+    // Inside a cell the arrows belong to the input.
+    fireEvent.keyDown(byHook(c3, 'data-cell', 'name'), { key: 'ArrowDown' });
+    expect(useEditor.getState().selection.links).toEqual(['C2']);
+  });
+
   it('does not re-centre the sheet on a click into a cell of the row already selected', () => {
     const { container } = render(<SchedulePanel />);
     const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');

@@ -2,7 +2,7 @@
 // default), filtered by status; a row click selects the link and asks the sheet to centre it.
 // Above WINDOW_THRESHOLD rows only the rows in view are rendered.
 
-import { useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { useEditor } from '../../store/index.js';
 import { SizeList } from '../details/LinkDetails.js';
 import { STATUS_LOOK } from '../format.js';
@@ -29,6 +29,26 @@ export function windowRange(count: number, scrollTop: number, viewHeight: number
   const first = Math.max(0, Math.floor(scrollTop / ROW_HEIGHT) - OVERSCAN);
   const last = Math.min(count, Math.ceil((scrollTop + viewHeight) / ROW_HEIGHT) + OVERSCAN);
   return [first, last];
+}
+
+/** Up and down arrows on a focused row move the selection to the row above or below. */
+function moveByKey(e: KeyboardEvent<HTMLTableSectionElement>, shown: readonly ScheduleRowData[]) {
+  if (e.key !== 'ArrowDown' && e.key !== 'ArrowUp') return;
+  const row = e.target instanceof HTMLElement ? e.target : null;
+  const id = row?.getAttribute('data-schedule-row');
+  if (!row || !id) return; // inside a cell the arrows stay with the input
+  const at = shown.findIndex((r) => r.link.id === id);
+  const next = shown[at + (e.key === 'ArrowDown' ? 1 : -1)];
+  if (at < 0 || !next) return;
+  e.preventDefault();
+  const s = useEditor.getState();
+  s.select({ nodes: [], links: [next.link.id] });
+  s.requestFocus([next.link.id]);
+  const body = row.closest('tbody');
+  requestAnimationFrame(() => {
+    const rows = body ? [...body.querySelectorAll<HTMLElement>('[data-schedule-row]')] : [];
+    rows.find((r) => r.getAttribute('data-schedule-row') === next.link.id)?.focus();
+  });
 }
 
 export function SchedulePanel() {
@@ -112,7 +132,7 @@ export function SchedulePanel() {
               ))}
             </tr>
           </thead>
-          <tbody>
+          <tbody onKeyDown={(e) => moveByKey(e, shown)}>
             {first > 0 ? (
               <tr aria-hidden="true" className="lwp-spacer" style={{ height: first * ROW_HEIGHT }}>
                 <td colSpan={COLUMNS.length} />
