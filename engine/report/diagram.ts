@@ -10,7 +10,7 @@ import { BLOCK, BUS, type DiagramPlan, type Tile } from './diagram-plan.js';
 import { fmtCable, fmtMetre, fmtOhm, fmtRatio, fmtRcd, judgedLoop, STATUS_WORD } from './format.js';
 import { describeSourceShort } from './sources.js';
 import { textWidth, truncate, wrap } from './text.js';
-import type { Item, Stroke } from './types.js';
+import type { Item, Stroke, TextItem } from './types.js';
 
 /** Annotation text size on paper, mm. */
 export const LABEL_TEXT = 2.2;
@@ -114,22 +114,44 @@ function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number): Item[] {
   return items;
 }
 
-/** A continuation mark at the left or right edge of the area, above a bus at height y. */
-function edgeMark(ctx: Ctx, side: 'left' | 'right', y: number, lines: string[]): Item[] {
+type BoxMm = { x0: number; x1: number; y0: number; y1: number };
+
+function boxOf(t: TextItem): BoxMm {
+  const w = textWidth(t.text, t.font, t.size);
+  const x0 = t.anchor === 'start' ? t.x : t.anchor === 'middle' ? t.x - w / 2 : t.x - w;
+  return { x0, x1: x0 + w, y0: t.y - t.size * 0.8, y1: t.y + t.size * 0.3 };
+}
+
+function hits(a: BoxMm, list: BoxMm[]): boolean {
+  return list.some((b) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1);
+}
+
+/**
+ * A continuation mark at the left or right edge of the area, on a bus at height y: the arrow on
+ * the bus, the text just above it, or moved up or down until it clears the text already there.
+ */
+function edgeMark(ctx: Ctx, side: 'left' | 'right', y: number, lines: string[], occupied: BoxMm[]): Item[] {
   const a = ctx.plan.area;
-  const items: Item[] = [];
   const edge = side === 'left' ? a.x : a.x + a.w;
   const tip = side === 'left' ? edge - 0.5 : edge + 0.5;
-  items.push(arrowHead(side === 'left' ? tip + 3 : tip - 3, y, tip, y, 2.2));
-  lines.forEach((l, i) => {
-    const ty = y - 1.2 - (lines.length - 1 - i) * LH;
-    items.push(text(side === 'left' ? edge + 1 : edge - 1, ty, l, LABEL_TEXT, i === 0 ? 'bold' : 'regular', side === 'left' ? 'start' : 'end'));
-  });
-  return items;
+  const arrow = arrowHead(side === 'left' ? tip + 3 : tip - 3, y, tip, y, 2.2);
+  const build = (bottom: number): TextItem[] =>
+    lines.map((l, i) => text(side === 'left' ? edge + 1 : edge - 1, bottom - (lines.length - 1 - i) * LH, l, LABEL_TEXT, i === 0 ? 'bold' : 'regular', side === 'left' ? 'start' : 'end'));
+  const offsets = Array.from({ length: 24 }, (_, k) => k).flatMap((k) => [-1.2 - k * LH, k === 0 ? NaN : 1.2 + lines.length * LH + (k - 1) * LH]);
+  for (const off of offsets) {
+    if (Number.isNaN(off)) continue;
+    const candidate = build(y + off);
+    const boxes = candidate.map(boxOf);
+    if (boxes.every((b) => b.y0 >= a.y - 3.5 && b.y1 <= a.y + a.h + 3.5) && !boxes.some((b) => hits(b, occupied))) {
+      occupied.push(...boxes);
+      return [arrow, ...candidate];
+    }
+  }
+  return [arrow, ...build(y - 1.2)];
 }
 
 function wrapList(head: string, ids: string[]): string[] {
-  return [head, ...wrap(ids.join(', '), 'regular', LABEL_TEXT, 70, 3)];
+  return [head, ...wrap(ids.join(', '), 'regular', LABEL_TEXT, 60, 1)];
 }
 
 /** Every item of diagram tile `index` (no title block). */
@@ -142,6 +164,13 @@ export function drawTile(ctx: Ctx, index: number): Item[] {
   const symbols: Item[] = [];
   const outgoing = new Map<string, { side: 'left' | 'right'; y: number; bySheet: Map<number, string[]> }>();
   const incoming = new Map<string, { side: 'left' | 'right'; y: number; parent: string; sheet: number }>();
+  // Marks in the bands above and below the drawing, merged where several share one drop line.
+  const band = new Map<string, { x: number; y: number; parts: string[]; tail: string }>();
+  const addBand = (key: string, x: number, y: number, part: string, tail: string): void => {
+    const entry = band.get(key) ?? { x, y, parts: [], tail };
+    if (!entry.parts.includes(part)) entry.parts.push(part);
+    band.set(key, entry);
+  };
 
   for (const link of ctx.job.links) {
     const pIn = here(link.from);
@@ -175,7 +204,7 @@ export function drawTile(ctx: Ctx, index: number): Item[] {
         const down = other.row > tile.row;
         const edgeY = down ? bottom - 1 : top + 1;
         items.push(line(p.x, busY, c.x, busY, st), line(c.x, busY, c.x, edgeY, st), arrowHead(c.x, busY, c.x, down ? bottom + 1 : top - 1, 2));
-        items.push(text(c.x + 1.5, down ? bottom + 0.3 : top + 0.3, `${link.id} to ${link.to}, continued on sheet ${ctx.sheetOf(ct)}`, LABEL_TEXT, 'bold'));
+        addBand(`${c.x}|${down ? 'b' : 't'}`, c.x + 1.5, down ? bottom + 0.3 : top + 0.3, `${link.to} · sheet ${ctx.sheetOf(ct)}`, down ? ' ↓' : ' ↑');
       }
       continue;
     }
@@ -190,8 +219,7 @@ export function drawTile(ctx: Ctx, index: number): Item[] {
         const fromAbove = other.row < tile.row;
         dropTop = fromAbove ? top - 1 : bottom + 1;
         items.push(arrowHead(c.x, fromAbove ? top - 3 : bottom + 3, c.x, fromAbove ? top + 1.5 : bottom - 1.5, 2));
-        const parent = ctx.nodes.get(link.from);
-        items.push(text(c.x + 1.5, fromAbove ? top + 0.3 : bottom + 0.3, `from ${link.from}${parent?.name !== undefined ? ` ${parent.name}` : ''}, sheet ${ctx.sheetOf(pt)}`, LABEL_TEXT, 'bold'));
+        addBand(`${c.x}|${fromAbove ? 't' : 'b'}`, c.x + 1.5, fromAbove ? top + 0.3 : bottom + 0.3, `from ${link.from} · sheet ${ctx.sheetOf(pt)}`, '');
       }
     }
     const childHalf = SYMBOL_HALF[ctx.nodes.get(link.to)?.kind ?? 'point'].h;
@@ -201,24 +229,32 @@ export function drawTile(ctx: Ctx, index: number): Item[] {
     symbols.push(...linkLabel(ctx, link, c.x, c.y));
   }
 
-  for (const { side, y, bySheet } of outgoing.values()) {
-    const lines: string[] = [];
-    for (const [sheet, ids] of [...bySheet.entries()].sort((x, y2) => x[0] - y2[0])) {
-      lines.push(...wrapList(side === 'left' ? `← continued on sheet ${sheet}:` : `continued on sheet ${sheet} →`, ids));
-    }
-    items.push(...edgeMark(ctx, side, y, lines));
-  }
-  for (const { side, y, parent, sheet } of incoming.values()) {
-    const node = ctx.nodes.get(parent);
-    const name = truncate(`${parent}${node?.name !== undefined ? ` ${node.name}` : ''}`, 'regular', LABEL_TEXT, 60);
-    const head = side === 'left' ? `← from sheet ${sheet}` : `from sheet ${sheet} →`;
-    items.push(...edgeMark(ctx, side, y, [head, name]));
-  }
   for (const id of tile.nodes) {
     const node = ctx.nodes.get(id);
     if (node === undefined) continue;
     const p = at(ctx, id, tile);
     symbols.push(...nodeBlock(ctx, node, p.x, p.y));
+  }
+  const bandItems = [...band.values()].sort((p, q) => p.x - q.x || p.y - q.y);
+  bandItems.forEach((b, i) => {
+    const next = bandItems.slice(i + 1).find((o) => o.y === b.y);
+    const room = Math.min((next?.x ?? a.x + a.w) - b.x - 1, a.x + a.w - b.x);
+    const label = `${b.parts.join(', ')}${b.tail}`;
+    items.push(text(b.x, b.y, truncate(label, 'bold', LABEL_TEXT, Math.max(room, 4)), LABEL_TEXT, 'bold'));
+  });
+  const occupied = [...items, ...symbols].filter((i): i is TextItem => i.kind === 'text').map(boxOf);
+  for (const { side, y, bySheet } of outgoing.values()) {
+    const lines: string[] = [];
+    for (const [sheet, ids] of [...bySheet.entries()].sort((x, y2) => x[0] - y2[0])) {
+      lines.push(...wrapList(side === 'left' ? `← continued on sheet ${sheet}:` : `continued on sheet ${sheet} →`, ids));
+    }
+    items.push(...edgeMark(ctx, side, y, lines, occupied));
+  }
+  for (const { side, y, parent, sheet } of incoming.values()) {
+    const node = ctx.nodes.get(parent);
+    const name = truncate(`${parent}${node?.name !== undefined ? ` ${node.name}` : ''}`, 'regular', LABEL_TEXT, 60);
+    const head = side === 'left' ? `← from sheet ${sheet}` : `from sheet ${sheet} →`;
+    items.push(...edgeMark(ctx, side, y, [head, name], occupied));
   }
   return [...items, ...symbols];
 }

@@ -8,7 +8,7 @@ import {
   fmtAmp, fmtCable, fmtMetre, fmtOhm, fmtRatio, fmtRcd, fmtSec, ROLE_SHORT, scheduleOrder, STATUS_WORD,
 } from './format.js';
 import type { Box } from './paper.js';
-import { textWidth, wrap } from './text.js';
+import { textWidth, truncate, wrap } from './text.js';
 import type { Item } from './types.js';
 
 interface Column {
@@ -88,19 +88,37 @@ export interface SchedulePage {
 /** The schedule as pages of items, each page filling `box`. */
 export function schedulePages(job: Job, results: Results, box: Box): Item[][] {
   const size = box.w >= 380 ? 2.2 : 2;
-  const lh = size * 1.25;
-  const cols = columns(results);
+  const all = columns(results);
   const links = new Map(job.links.map((l) => [l.id, l]));
   const ordered = scheduleOrder(results.circuits);
-  const cells = ordered.map((c) => cols.map((col) => col.value(c, links.get(c.link))));
-  const ws = widths(cols, cells, box.w, size);
+  const cells = ordered.map((c) => all.map((col) => col.value(c, links.get(c.link))));
+  const ws = widths(all, cells, box.w, size);
+  if (ws.reduce((a, w) => a + w, 0) <= box.w + 0.01) return table(results, ordered, all, cells, ws, box, size, '');
+  // Too narrow for one table: inputs, then results, each row led by its link id.
+  const split = all.findIndex((c) => c.head === 'Method');
+  const groups = [[0, ...range(1, split)], [0, ...range(split, all.length)]];
+  return groups.flatMap((g, k) => {
+    const cols = g.map((i) => all[i]).filter((c): c is Column => c !== undefined);
+    const sub = cells.map((row) => g.map((i) => row[i] ?? ''));
+    return table(results, ordered, cols, sub, widths(cols, sub, box.w, size), box, size, k === 0 ? ', inputs' : ', results');
+  });
+}
+
+function range(from: number, to: number): number[] {
+  return Array.from({ length: Math.max(0, to - from) }, (_, i) => from + i);
+}
+
+function table(
+  results: Results, ordered: CircuitResult[], cols: Column[], cells: string[][], ws: number[], box: Box, size: number, part: string,
+): Item[][] {
+  const lh = size * 1.25;
   const xs: number[] = [];
   ws.reduce((x, w) => (xs.push(x), x + w), box.x);
 
   const headLines = cols.map((col, i) => wrap(col.head, 'bold', size, (ws[i] ?? 10) - 2 * PAD, 3));
   const headH = Math.max(...headLines.map((l) => l.length)) * lh + 1.6;
   const s = results.summary;
-  const title = `Circuit schedule: ${results.circuits.length} links (${s.fail} fail, ${s.rcd} RCD, ${s.pass} pass, ${s.unchecked} unchecked); failures first, then by share of the limit; unchecked last.`;
+  const title = truncate(`Circuit schedule${part}: ${results.circuits.length} links (${s.fail} fail, ${s.rcd} RCD, ${s.pass} pass, ${s.unchecked} unchecked), failures first, then by share of the limit, unchecked last`, 'bold', 2.6, box.w);
 
   const pages: Item[][] = [];
   let page: Item[] = [];
