@@ -122,3 +122,21 @@ describe('files in the browser', () => {
     expect(await page.locator('[data-restore-banner]').count()).toBe(0);
   });
 });
+
+describe('printing in the browser', () => {
+  it('prints the printout’s own sheets (diagram, schedule, assumptions) from a print view', async () => {
+    const page = await app.newPage();
+    await page.evaluate(() => {
+      const w = window as unknown as { print(): void; printed?: Array<{ title: string; width: number }> };
+      w.print = () => {
+        w.printed = [...document.querySelectorAll<HTMLImageElement>('[data-print-view] img')].map((i) => ({ title: i.alt, width: i.naturalWidth }));
+      };
+    });
+    await page.click('[data-command="file.print"]');
+    const printed = await page.waitForFunction(() => (window as unknown as { printed?: unknown }).printed).then((h) => h.jsonValue()) as Array<{ title: string; width: number }>;
+    expect(printed.length).toBeGreaterThanOrEqual(3);
+    for (const sheet of printed) expect(sheet.width).toBeGreaterThan(0);
+    expect(printed.map((p) => p.title).join(' | ')).toMatch(/schedule/i);
+    expect(await page.locator('[data-print-view]').count()).toBe(0);
+  });
+});

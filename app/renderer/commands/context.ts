@@ -4,6 +4,7 @@ import { useEditor } from '../store/editor.js';
 import { getSheetHandle } from '../sheet/handle.js';
 import { confirmDiscard, openJob, saveJob } from '../io/files.js';
 import { useUi } from '../app/ui.js';
+import { printInBrowser } from '../io/print.js';
 import { getCommand } from './registry.js';
 import type { CommandContext } from './types.js';
 
@@ -30,12 +31,7 @@ export function makeContext(): CommandContext {
         await api.print(text);
         return;
       }
-      document.body.classList.add('lw-printing');
-      try {
-        window.print();
-      } finally {
-        document.body.classList.remove('lw-printing');
-      }
+      await printInBrowser();
     },
     async exportPdf() {
       if (!api) {
