@@ -82,7 +82,8 @@ export function readNumber(site: Site, obj: Json, key: string, rule: NumberRule,
 export function readString(site: Site, obj: Json, key: string, opts: { required?: boolean; path?: string; nonEmpty?: boolean } = {}): string | undefined {
   const field = opts.path ?? key;
   const value = obj[key];
-  if (value === undefined) {
+  // An optional text given as null reads as absent (other tools write null for "none").
+  if (value === undefined || (value === null && !opts.required)) {
     if (opts.required) site.bad(field, opts.nonEmpty ? 'a non-empty text' : 'a text', value);
     return undefined;
   }
