@@ -22,6 +22,7 @@ import type { Obj } from './helpers.js';
 // S1 → M1 → MSB → SM1 (C40) → DB → C1 (C20) → P1 (lighting) → C1b → P2 (socket-outlets) → C1c → P3
 //                                                                P2 → SP1 (fused spur, fixed 50 A) → P4 → SP1b → P5 (hand-held)
 //                                  DB → C2 (C80) → P6 (socket-outlets)
+//                                  DB → U2 (no device) → P9
 //                 MSB → U1 (no device) → P7 → U1b → P8
 // DBX (fed by nothing) → X1 (C16) → PX
 function network(basis: 'au-nz' | 'iec', supply: Obj = unknownSupply('S1'), extraLinks: Obj = {}): Obj {
@@ -39,6 +40,7 @@ function network(basis: 'au-nz' | 'iec', supply: Obj = unknownSupply('S1'), extr
       point('P6', 'socket-outlets'),
       point('P7', 'lighting'),
       point('P8', 'lighting'),
+      point('P9', 'lighting'),
       board('DBX'),
       point('PX', 'socket-outlets'),
     ],
@@ -53,6 +55,7 @@ function network(basis: 'au-nz' | 'iec', supply: Obj = unknownSupply('S1'), extr
       link('C2', 'DB', 'P6', cable(15, 2.5, 2.5), { device: mcb('C', 80) }),
       link('U1', 'MSB', 'P7', cable(12, 2.5, 2.5)),
       link('U1b', 'P7', 'P8', cable(5, 2.5, 2.5)),
+      link('U2', 'DB', 'P9', cable(5, 2.5, 2.5)), // leaves a board: SM1's device above does not protect it
       link('X1', 'DBX', 'PX', cable(10, 2.5, 2.5), { device: mcb('C', 16) }),
     ],
   });
@@ -72,6 +75,7 @@ describe('roles', () => {
       C2: 'final-subcircuit',
       U1: 'final-subcircuit',
       U1b: 'final-subcircuit',
+      U2: 'final-subcircuit',
       X1: 'final-subcircuit',
     };
     const job = load(network('au-nz'));
@@ -129,7 +133,7 @@ describe('protection through chained points', () => {
   });
 
   it('unprotected links are unchecked with every device-dependent field null', () => {
-    for (const id of ['M1', 'U1', 'U1b']) {
+    for (const id of ['M1', 'U1', 'U1b', 'U2']) {
       const u = circuit(results, id);
       expect(u.status, id).toBe('unchecked');
       expect(u.method, id).toBe('unknown-source');

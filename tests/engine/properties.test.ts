@@ -39,9 +39,14 @@ describe('properties', () => {
   it('parse(serialise(job)) keeps the job, and the file keeps everything the user wrote', () => {
     fc.assert(
       fc.property(jobArb(), (file) => {
+        const copy = structuredClone(file);
         const first = loadJob(file);
         expect(first.ok).toBe(true);
+        expect(file).toEqual(copy); // loading never changes what the user gave it
         if (!first.ok) return;
+        const jobCopy = structuredClone(first.job);
+        analyse(first.job);
+        expect(first.job).toEqual(jobCopy); // nor does analysing
         const text = serialiseJob(first.job);
         const second = parseJob(text);
         expect(second.ok).toBe(true);
