@@ -63,14 +63,12 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
 
   const nodes: Array<{ item: JobNode; index: number }> = [];
   const links: Array<{ item: Link; index: number }> = [];
-  if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes', file.nodes);
+  if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes (use [] for none)', file.nodes);
   else file.nodes.forEach((raw, index) => {
     const node = validateNode(raw, index, problems);
     if (node) nodes.push({ item: node, index });
   });
-  if (file.links === undefined) {
-    // A job with nodes only is fine: nothing to check yet.
-  } else if (!Array.isArray(file.links)) top.bad('links', 'a list of links', file.links);
+  if (!Array.isArray(file.links)) top.bad('links', 'a list of links (use [] for none)', file.links);
   else file.links.forEach((raw, index) => {
     const link = validateLink(raw, index, problems);
     if (link) links.push({ item: link, index });
