@@ -3,22 +3,26 @@
 import { memo } from 'react';
 import { BaseEdge, EdgeLabelRenderer, type EdgeProps } from '@xyflow/react';
 import { useEditor } from '../store/editor.js';
-import { selectLink, selectResult } from '../store/selectors.js';
+import { selectLink, selectNode, selectResult } from '../store/selectors.js';
+import { NODE_SIZE } from './parts.js';
 import { linkGeometry, LABEL_WIDTH } from './geometry.js';
 import { cableLine, deviceLine, resultLine, statusText } from './labels.js';
 
-function LinkEdgeView({ id, sourceX, sourceY, targetX, targetY, selected }: EdgeProps) {
+function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected }: EdgeProps) {
   const link = useEditor(selectLink(id));
   const result = useEditor(selectResult(id));
   const traced = useEditor((s) => s.highlightPath?.includes(id) ?? false);
+  const targetKind = useEditor((s) => selectNode(target)(s)?.kind);
   if (!link) return null;
   const status = result?.status ?? 'unchecked';
-  const g = linkGeometry(sourceX, sourceY, targetX, targetY);
+  const g = linkGeometry(sourceX, sourceY, targetX, targetY, NODE_SIZE[targetKind ?? 'point'].width / 2);
   const cls = `lw-link lw-status--${status}${selected ? ' is-selected' : ''}${traced ? ' is-traced' : ''}`;
   const transform =
     g.labelPlace === 'above-target'
       ? `translate(-50%, -100%) translate(${g.labelX}px, ${g.labelY}px)`
-      : `translate(-50%, -50%) translate(${g.labelX}px, ${g.labelY}px)`;
+      : g.labelPlace === 'beside-target'
+        ? `translate(0, -50%) translate(${g.labelX}px, ${g.labelY}px)`
+        : `translate(-50%, -50%) translate(${g.labelX}px, ${g.labelY}px)`;
   const name = link.name ? `${link.name}: ` : '';
   return (
     <>

@@ -79,6 +79,20 @@ export function Sheet({ onContextMenu }: SheetProps) {
     if (focus) centre(focus.ids);
   }, [focus, centre]);
 
+  // A job just opened (or a new one started): show it at a readable scale.
+  const documentSeq = useEditor((s) => s.documentSeq);
+  const firstDocument = useRef(documentSeq);
+  useEffect(() => {
+    if (documentSeq === firstDocument.current) return; // the first view is React Flow's own fitView
+    const frame = requestAnimationFrame(() => {
+      if (useEditor.getState().job.nodes.length === 0) {
+        const box = wrapper.current?.getBoundingClientRect();
+        void flow.setViewport({ x: (box?.width ?? 800) / 2, y: 60, zoom: 1 });
+      } else void flow.fitView({ padding: 0.08, minZoom: 0.5, maxZoom: 1 });
+    });
+    return () => cancelAnimationFrame(frame);
+  }, [documentSeq, flow]);
+
   const onNodesChange = useCallback((changes: NodeChange[]) => {
     const s = useEditor.getState();
     const live: Array<{ id: string; at: { x: number; y: number } }> = [];

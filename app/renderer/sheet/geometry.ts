@@ -12,18 +12,19 @@ export interface LinkGeometry {
   path: string;
   labelX: number;
   labelY: number;
-  /** 'above-target' or 'middle' (when the far node is not below the feeder). */
-  labelPlace: 'above-target' | 'middle';
+  /** 'above-target'; 'beside-target' when there is no room above it; 'middle' when the far node is not below the feeder. */
+  labelPlace: 'above-target' | 'beside-target' | 'middle';
 }
 
-export function linkGeometry(sx: number, sy: number, tx: number, ty: number): LinkGeometry {
-  if (ty - sy > BUS_DROP * 2 + 8) {
-    const busY = sy + BUS_DROP;
+/** `targetHalfWidth`: half the far node's drawn width (a label beside it clears the node). */
+export function linkGeometry(sx: number, sy: number, tx: number, ty: number, targetHalfWidth = 80): LinkGeometry {
+  if (ty - sy > 8) {
+    const busY = Math.min(sy + BUS_DROP, (sy + ty) / 2);
     const path = `M ${sx},${sy} V ${busY} H ${tx} V ${ty}`;
     const roomy = ty - busY > LABEL_HEIGHT + 8;
     return roomy
       ? { path, labelX: tx, labelY: ty - 6, labelPlace: 'above-target' }
-      : { path, labelX: tx, labelY: (busY + ty) / 2, labelPlace: 'middle' };
+      : { path, labelX: tx + targetHalfWidth + 10, labelY: ty - 4, labelPlace: 'beside-target' };
   }
   // The far node is level with or above the feeder: go out and round.
   const midX = (sx + tx) / 2;

@@ -32,6 +32,8 @@ export interface EditorState {
   message: { kind: 'info' | 'error'; text: string } | null;
   /** A request for the sheet to centre these ids (seq changes on every request). */
   focus: { ids: string[]; seq: number } | null;
+  /** Changes every time loadJob replaces the document (the sheet fits the new job into view). */
+  documentSeq: number;
   /** Labels of the next undo and redo steps, for menus ("Undo move"). */
   undoLabel: string | null;
   redoLabel: string | null;
@@ -122,6 +124,7 @@ export const useEditor = create<EditorState>()((set, get) => {
     breakdownLink: null,
     message: null,
     focus: null,
+    documentSeq: 0,
     undoLabel: null,
     redoLabel: null,
 
@@ -177,6 +180,7 @@ export const useEditor = create<EditorState>()((set, get) => {
         fileName: file?.name ?? null,
         filePath: file?.path ?? null,
         message: null,
+        documentSeq: get().documentSeq + 1,
       });
     },
 
