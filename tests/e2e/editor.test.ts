@@ -3,6 +3,7 @@
 // and trace the worst loop with its breakdown.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import { CAUTION } from '../../engine/index.js';
 import { startApp, stopApp, type App } from './harness.js';
 import { connect, dropPart, leaveFields, statuses, typeField } from './helpers.js';
 
@@ -159,6 +160,13 @@ describe('readability of the demo', () => {
     const words = await page.$$eval('[data-link-label]', (els) => els.map((e) => e.querySelector('.lw-label-status')?.textContent ?? ''));
     for (const w of words) expect(w).toMatch(/^(✓ pass|✗ FAIL|⚠ RCD-reliant|○ unchecked)$/);
     expect(new Set(words)).toEqual(new Set(['✓ pass', '✗ FAIL', '⚠ RCD-reliant', '○ unchecked']));
+  });
+
+  it('shows the caution in the status bar and in full in the About dialog', async () => {
+    const page = await app.newPage();
+    expect(await page.textContent('[data-caution]')).toMatch(/design aid.*verify by testing.*local wiring rules/i);
+    await page.click('[data-caution]');
+    expect(await page.textContent('[data-caution-full]')).toContain(CAUTION);
   });
 });
 

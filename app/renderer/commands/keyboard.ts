@@ -29,8 +29,8 @@ export function useShortcuts(): void {
       if (isTyping(e.target as Element) && (TEXT_KEYS.has(key) || !/^(Mod|Alt)\+/.test(key))) return;
       // Menus and dialogs handle their own keys.
       if ((e.target as Element | null)?.closest?.('[role="dialog"], [role="menu"]')) return;
+      // A disabled command leaves the key to the browser (Ctrl+C still copies page text).
       if (runCommand(id)) e.preventDefault();
-      else if (key.startsWith('Mod+')) e.preventDefault(); // a disabled command still owns its key
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);

@@ -38,7 +38,8 @@ export async function openFromInput(input: HTMLInputElement): Promise<void> {
 export async function openJob(): Promise<void> {
   const api = window.loopwright;
   if (api) {
-    if (!confirmDiscard('Open another job')) return;
+    // The main process opens the file in a window of its own when this one has changes or a
+    // file (app/shared/ipc.ts), so nothing here is replaced without asking.
     const opened = await api.openJob();
     if (opened) openText(opened.text, opened.name, opened.path);
     return;
