@@ -173,7 +173,8 @@ export function Sheet({ onContextMenu }: SheetProps) {
     onContextMenu({ x: e.clientX, y: e.clientY });
   }, [flow, onContextMenu]);
 
-  const large = jobNodes.length > 400;
+  // Above this size only what is in view is drawn (every link still has its result in the schedule).
+  const large = jobNodes.length > 1000;
   return (
     <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
       <ReactFlow
