@@ -80,7 +80,10 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   if (errors.length) return { ok: false, problems: errors };
 
   const extra: Record<string, unknown> = {};
-  for (const [key, val] of Object.entries(file)) if (!KNOWN_KEYS.has(key)) extra[key] = val;
+  for (const [key, val] of Object.entries(file)) {
+    // defineProperty, so even a key named "__proto__" is kept as plain data.
+    if (!KNOWN_KEYS.has(key)) Object.defineProperty(extra, key, { value: val, enumerable: true, writable: true, configurable: true });
+  }
   const job: Job = {
     format: FORMAT_NAME,
     version: CURRENT_VERSION,
