@@ -5,17 +5,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyse, loadJob, parseJob, serialiseJob, toFileObject } from '../../engine/index.js';
-import type { Results } from '../../engine/index.js';
 import { cableArb, deviceArb, jobArb, sourceArb } from './arbitraries.js';
-import { board, circuit, jobFile, link, load, point, unknownSupply } from './helpers.js';
+import { board, circuit, jobFile, link, point, run, unknownSupply } from './helpers.js';
 import type { Obj } from './helpers.js';
 
 const knownSource = sourceArb.filter((s) => s.type !== 'unknown');
 const links = (file: Obj) => file.links as Obj[];
-
-function analyseFile(file: Obj): Results {
-  return analyse(load(file));
-}
 
 /** Links below link `id` (fed from its far end, directly or further down). */
 function descendants(file: Obj, id: string): Set<string> {
@@ -63,7 +58,7 @@ describe('properties', () => {
   it('Zs never falls going downstream (known source)', () => {
     fc.assert(
       fc.property(jobArb({ source: knownSource }), (file) => {
-        const r = analyseFile(file);
+        const r = run(file);
         for (const l of links(file)) {
           const here = circuit(r, l.id as string).zs;
           expect(here).not.toBeNull();
@@ -89,8 +84,8 @@ describe('properties', () => {
           const longer = structuredClone(file);
           const cab = (links(longer).find((l) => l.id === target.id) as Obj).cable as Obj;
           cab.length = (cab.length as number) + delta;
-          const before = analyseFile(file);
-          const after = analyseFile(longer);
+          const before = run(file);
+          const after = run(longer);
           const below = descendants(file, target.id as string);
           for (const l of ls) {
             const id = l.id as string;
@@ -117,8 +112,8 @@ describe('properties', () => {
               link('C1', 'MSB', 'P1', { ...cab, parallel }, { device }),
             ],
           });
-        const one = circuit(analyseFile(make(1)), 'C1');
-        const two = circuit(analyseFile(make(2)), 'C1');
+        const one = circuit(run(make(1)), 'C1');
+        const two = circuit(run(make(2)), 'C1');
         expect(one.own).not.toBeNull();
         const own1 = one.own as number;
         const own2 = two.own as number;
@@ -136,7 +131,7 @@ describe('properties', () => {
   it('status agrees with the ratio, RCDs and summary', () => {
     fc.assert(
       fc.property(jobArb(), (file) => {
-        const r = analyseFile(file);
+        const r = run(file);
         const byId = new Map(links(file).map((l) => [l.id as string, l]));
         let worst: number | null = null;
         for (const c of r.circuits) {
@@ -172,7 +167,7 @@ describe('properties', () => {
   it('worst.path alternates node and link ids from the supply to the worst link’s far end', () => {
     fc.assert(
       fc.property(jobArb({ allDevices: true }), (file) => {
-        const r = analyseFile(file);
+        const r = run(file);
         if (!r.worst) return;
         const path = r.worst.path;
         expect(path[0]).toBe('N0');
