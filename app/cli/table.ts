@@ -2,6 +2,7 @@
 // path, the summary and the caution. It only arranges what analyse(job) computed.
 
 import { CAUTION, type CircuitResult, type Job, type Link, type Results } from '../../engine/index.js';
+import { ROLE_SHORT } from '../../engine/report/format.js';
 import { amps, cableMark, clip, metres, ohms, percent, seconds, STATUS_WORD, summaryLine } from './format.js';
 
 type Align = 'left' | 'right';
@@ -25,12 +26,6 @@ export function alignTable<Row>(columns: readonly Column<Row>[], rows: readonly 
   return [line(columns.map((c) => c.head)), rule, ...cells.map(line)];
 }
 
-const ROLE_WORD: Record<CircuitResult['role'], string> = {
-  'consumer-mains': 'mains',
-  submain: 'submain',
-  'final-subcircuit': 'final',
-};
-
 interface Row {
   result: CircuitResult;
   link: Link | undefined;
@@ -51,7 +46,7 @@ function columnsFor(results: Results): Column<Row>[] {
   const columns: Column<Row>[] = [
     { head: 'link', align: 'left', cell: (r) => r.result.link },
     { head: 'name', align: 'left', cell: (r) => clip(r.result.name ?? '', 28) },
-    { head: 'role', align: 'left', cell: (r) => ROLE_WORD[r.result.role] },
+    { head: 'role', align: 'left', cell: (r) => ROLE_SHORT[r.result.role] },
     { head: 'from→to', align: 'left', cell: (r) => `${r.result.from}→${r.result.to}` },
     { head: 'device', align: 'left', cell: deviceCell },
     { head: 'cable mm²', align: 'left', cell: (r) => (r.link !== undefined ? cableMark(r.link.cable) : '') },
