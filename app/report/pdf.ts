@@ -76,7 +76,9 @@ export function sheetsToPdf(sheets: Sheet[], meta: { title: string; subject: str
   const doc = new PDFDocument({
     autoFirstPage: false,
     compress: true,
-    font: Buffer.from(fonts.regular) as unknown as string,
+    // No default font: a default opened from the same bytes as LW-Regular made pdfkit re-parse
+    // the font on every switch to LW-Regular (its cache is keyed by the first name it saw).
+    font: null as unknown as string,
     info: {
       Title: meta.title,
       Subject: meta.subject,
