@@ -10,9 +10,45 @@ import {
   type Results,
 } from '../../../engine/index.js';
 
-/** The first error the engine's validator finds in the job, preferring one about the touched ids. */
-export function firstError(job: Job, touched: string[]): Problem | null {
-  const loaded = readJob(toFileObject(job));
+/**
+ * What the engine's validator has to see to judge `next`, made from `base` (a job known to have
+ * no errors) by an edit. Every record is checked on its own and the rules that span records
+ * (ids, references, one feeder each, no cycles) depend only on ids, ends and kinds; so when an
+ * edit changes no id, end or kind, and adds or removes nothing, the records it replaced (with
+ * the nodes their links join) are all that can hold a new error. Those go at their own indices
+ * in otherwise empty (sparse) lists, so every problem still names its true place ("links[812]
+ * (C4)"). Anything else gets the whole job.
+ */
+export function validationInput(base: Job | null, next: Job): Record<string, unknown> {
+  const file = toFileObject(next);
+  if (!base || base.nodes.length !== next.nodes.length || base.links.length !== next.links.length) return file;
+  if (base.extra !== next.extra) return file;
+  const nodes: unknown[] = new Array(next.nodes.length);
+  const links: unknown[] = new Array(next.links.length);
+  const ends = new Set<string>();
+  for (let i = 0; i < next.links.length; i++) {
+    const a = base.links[i]!;
+    const b = next.links[i]!;
+    if (a === b) continue;
+    if (a.id !== b.id || a.from !== b.from || a.to !== b.to) return file;
+    links[i] = b;
+    ends.add(b.from).add(b.to);
+  }
+  for (let i = 0; i < next.nodes.length; i++) {
+    const a = base.nodes[i]!;
+    const b = next.nodes[i]!;
+    if (a !== b && (a.id !== b.id || a.kind !== b.kind)) return file;
+    if (a !== b || ends.has(b.id)) nodes[i] = b;
+  }
+  return { ...file, nodes, links };
+}
+
+/**
+ * The first error the engine's validator finds in the job, preferring one about the touched ids.
+ * `base`: the error-free job the edit started from, so only what the edit changed is checked.
+ */
+export function firstError(job: Job, touched: string[], base: Job | null = null): Problem | null {
+  const loaded = readJob(validationInput(base, job));
   if (loaded.ok) return null;
   const errors = loaded.problems.filter((p) => p.severity === 'error');
   if (errors.length === 0) return null;

@@ -77,7 +77,7 @@ function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; rea
     throw e;
   }
   if (next === job) return { ok: true, next };
-  const problem = firstError(next, touchedIds(edit));
+  const problem = firstError(next, touchedIds(edit), job);
   if (problem) return { ok: false, reason: describe(problem), ...(problem.field ? { field: problem.field } : {}) };
   return { ok: true, next };
 }
