@@ -15,6 +15,8 @@ import { setSheetHandle } from './handle.js';
 import { newPart } from './parts.js';
 
 export const PART_MIME = 'application/x-loopwright-part';
+/** Above this many nodes only what is in view is drawn, and the view jumps rather than glides. */
+export const LARGE = 1000;
 
 function linkPrefix(job: ReturnType<typeof useEditor.getState>['job'], from: string, to: string): string {
   const a = job.nodes.find((n) => n.id === from);
@@ -57,14 +59,16 @@ export function Sheet({ onContextMenu }: SheetProps) {
           nodeIds.add(link.to);
         } else nodeIds.add(id);
       }
-      if (nodeIds.size > 0) void flow.fitView({ nodes: [...nodeIds].map((id) => ({ id })), maxZoom: 1.1, padding: 0.3, duration: 250 });
+      // On a large job every animation frame redraws what comes into view: jump instead.
+      const duration = job.nodes.length > LARGE ? 0 : 250;
+      if (nodeIds.size > 0) void flow.fitView({ nodes: [...nodeIds].map((id) => ({ id })), maxZoom: 1.1, padding: 0.3, duration });
     },
     [flow],
   );
 
   useEffect(() => {
     setSheetHandle({
-      fit: () => void flow.fitView({ padding: 0.08, duration: 250 }),
+      fit: () => void flow.fitView({ padding: 0.08, duration: useEditor.getState().job.nodes.length > LARGE ? 0 : 250 }),
       centre,
       cursor: () => {
         if (cursor.current) return cursor.current;
@@ -174,7 +178,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
   }, [flow, onContextMenu]);
 
   // Above this size only what is in view is drawn (every link still has its result in the schedule).
-  const large = jobNodes.length > 1000;
+  const large = jobNodes.length > LARGE;
   return (
     <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
       <ReactFlow
