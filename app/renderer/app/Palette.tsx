@@ -4,6 +4,8 @@ import type { NodeKind } from '../../../engine/index.js';
 import { runCommand } from '../commands/context.js';
 import { PART_MIME } from '../sheet/Sheet.js';
 import { PART_HINT, PART_LABEL } from '../sheet/parts.js';
+import { Legend } from './Legend.js';
+import { useUi } from './ui.js';
 
 const KINDS: NodeKind[] = ['supply', 'board', 'point'];
 
@@ -31,13 +33,12 @@ export function Palette() {
         </button>
       ))}
       <p className="lw-hint">Connect parts by dragging from the dot under one to the dot on top of another.</p>
-      <h2>Status</h2>
-      <ul className="lw-legend">
-        <li className="lw-status--pass">✓ pass</li>
-        <li className="lw-status--fail">✗ FAIL</li>
-        <li className="lw-status--rcd">⚠ RCD-reliant</li>
-        <li className="lw-status--unchecked">○ unchecked</li>
-      </ul>
+      <h2>Legend</h2>
+      <Legend compact />
+      <button type="button" className="lw-link-button" data-action="open-legend" title="The legend in full, with the caution and the keyboard (F1)"
+        onClick={() => useUi.getState().set({ aboutOpen: true })}>
+        Full legend and keys…
+      </button>
     </aside>
   );
 }

@@ -3,6 +3,7 @@ import { CAUTION } from '../../../engine/index.js';
 import { COMMANDS } from '../commands/registry.js';
 import { showShortcut } from '../commands/keys.js';
 import { Dialog } from './Dialog.js';
+import { Legend } from './Legend.js';
 import { useUi } from './ui.js';
 
 export function AboutDialog() {
@@ -14,6 +15,8 @@ export function AboutDialog() {
       <p>Loopwright checks, for every circuit of a low-voltage installation, that an earth fault at its far end
         makes the protective device disconnect in time (fault-loop impedance).</p>
       <p className="lw-caution-full" data-caution-full><strong>Caution.</strong> {CAUTION}</p>
+      <h3>Legend</h3>
+      <Legend />
       <h3>Keyboard</h3>
       <table className="lw-keys">
         <tbody>

@@ -10,8 +10,29 @@ export interface UiState {
   contextMenu: { x: number; y: number } | null;
   recovery: (Autosaved & { job: Job }) | null;
   rightTab: 'details' | 'job';
+  /** Widths and heights the user dragged to (px); null = the default layout. Kept in the browser. */
+  layout: Layout;
+  setLayout(patch: Partial<Layout>): void;
   showProblems(title: string, lines: string[]): void;
-  set(patch: Partial<Omit<UiState, 'set' | 'showProblems'>>): void;
+  set(patch: Partial<Omit<UiState, 'set' | 'showProblems' | 'setLayout'>>): void;
+}
+
+export interface Layout {
+  rightWidth: number | null;
+  bottomHeight: number | null;
+}
+
+const LAYOUT_KEY = 'loopwright.layout';
+
+function readLayout(): Layout {
+  const none: Layout = { rightWidth: null, bottomHeight: null };
+  try {
+    const v = JSON.parse(globalThis.localStorage?.getItem(LAYOUT_KEY) ?? 'null') as Partial<Layout> | null;
+    const ok = (n: unknown) => (typeof n === 'number' && Number.isFinite(n) && n > 0 ? n : null);
+    return v && typeof v === 'object' ? { rightWidth: ok(v.rightWidth), bottomHeight: ok(v.bottomHeight) } : none;
+  } catch {
+    return none;
+  }
 }
 
 export const useUi = create<UiState>()((set) => ({
@@ -21,6 +42,17 @@ export const useUi = create<UiState>()((set) => ({
   contextMenu: null,
   recovery: null,
   rightTab: 'details',
+  layout: readLayout(),
+  setLayout: (patch) =>
+    set((s) => {
+      const layout = { ...s.layout, ...patch };
+      try {
+        globalThis.localStorage?.setItem(LAYOUT_KEY, JSON.stringify(layout));
+      } catch {
+        // Storage full or blocked: the layout still applies for this session.
+      }
+      return { layout };
+    }),
   showProblems: (title, lines) => set({ problems: { title, lines } }),
   set: (patch) => set(patch),
 }));

@@ -10,6 +10,16 @@ export function ohms(z: number | null | undefined): string {
   return `${z < 10 ? z.toFixed(3) : z < 100 ? z.toFixed(2) : z.toFixed(1)} Ω`;
 }
 
+/** Ohms without the unit, for tables whose column head carries it. */
+export function ohmsValue(z: number | null | undefined): string {
+  return ohms(z).replace(' Ω', '');
+}
+
+/** A ratio as a percentage without the sign, for tables whose column head carries it. */
+export function percentValue(ratio: number | null | undefined): string {
+  return percent(ratio).replace(' %', '');
+}
+
 /** A plain number, trimmed of trailing zeros, with an optional unit. */
 export function num(v: number | null | undefined, digits = 2, unit = ''): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';

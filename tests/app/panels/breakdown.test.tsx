@@ -1,6 +1,6 @@
 import { act, fireEvent, render } from '@testing-library/react';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { BreakdownPanel, showBreakdown } from '../../../app/renderer/panels/index.js';
+import { BreakdownPanel, showBreakdown, useBreakdownFollowsSelection, useBreakdownView } from '../../../app/renderer/panels/index.js';
 import { useEditor } from '../../../app/renderer/store/index.js';
 import { load, sampleJob } from './fixture.js';
 
@@ -55,7 +55,8 @@ describe('loop breakdown', () => {
         expect(s.text).toContain(`${s.z.toFixed(3)} Ω`);
         expect(s.text).toContain(`${((s.z / limit) * 100).toFixed(1)} % of limit`);
       }
-      expect(segments(container)[0]!.text).toContain('upstream (before the device)');
+      expect(segments(container)[0]!.text).toContain('upstream');
+      expect(segments(container)[2]!.text).not.toContain('upstream');
       expect(container.querySelector('.lwp-breakdown-verdict')!.textContent).toContain('FAIL');
     });
   });
@@ -83,5 +84,76 @@ describe('loop breakdown', () => {
     expect(useEditor.getState().breakdownLink).toBeNull();
     expect(useEditor.getState().highlightPath).toBeNull();
     expect(container.innerHTML).toBe('');
+  });
+});
+
+describe('the breakdown follows the selected circuit', () => {
+  function Harness() {
+    useBreakdownFollowsSelection();
+    return <BreakdownPanel />;
+  }
+  const shown = (container: HTMLElement) => container.querySelector('[data-breakdown]')?.getAttribute('data-breakdown');
+
+  beforeEach(() => {
+    load(sampleJob());
+    useBreakdownView.getState().set({ pinned: false, collapsed: false });
+  });
+
+  it('moves to the link selected next, with the highlighted path, and says so in its head', () => {
+    const { container } = render(<Harness />);
+    act(() => showBreakdown('C3'));
+    expect(container.querySelector('[data-breakdown-mode]')!.getAttribute('data-breakdown-mode')).toBe('follows');
+    act(() => useEditor.getState().select({ nodes: [], links: ['C1'] }));
+    expect(useEditor.getState().breakdownLink).toBe('C1');
+    expect(useEditor.getState().highlightPath).toEqual(['S1', 'M1', 'MSB', 'C1', 'P1']);
+    expect(shown(container)).toBe('C1');
+    expect(container.querySelector('h2')!.textContent).toContain('C1');
+  });
+
+  it('stays where it is when nodes, several links or nothing are selected', () => {
+    const { container } = render(<Harness />);
+    act(() => showBreakdown('C3'));
+    act(() => useEditor.getState().select({ nodes: ['MSB'], links: [] }));
+    act(() => useEditor.getState().select({ nodes: [], links: ['C1', 'C2'] }));
+    act(() => useEditor.getState().select({ nodes: [], links: [] }));
+    expect(useEditor.getState().breakdownLink).toBe('C3');
+    expect(shown(container)).toBe('C3');
+  });
+
+  it('stays on its link while pinned, and follows again once unpinned', () => {
+    const { container } = render(<Harness />);
+    act(() => showBreakdown('C3'));
+    fireEvent.click(container.querySelector('[data-action="pin-breakdown"]')!);
+    expect(container.querySelector('[data-panel="breakdown"]')!.getAttribute('data-pinned')).toBe('true');
+    expect(container.querySelector('[data-breakdown-mode]')!.textContent).toMatch(/Pinned to C3/);
+    act(() => useEditor.getState().select({ nodes: [], links: ['C1'] }));
+    expect(useEditor.getState().breakdownLink).toBe('C3');
+    expect(useEditor.getState().highlightPath).toEqual(['S1', 'M1', 'MSB', 'C3', 'P3']);
+    fireEvent.click(container.querySelector('[data-action="pin-breakdown"]')!);
+    act(() => useEditor.getState().select({ nodes: [], links: ['C2'] }));
+    expect(useEditor.getState().breakdownLink).toBe('C2');
+  });
+
+  it('does not open by itself: with the breakdown closed, a selection changes nothing', () => {
+    const { container } = render(<Harness />);
+    act(() => useEditor.getState().select({ nodes: [], links: ['C1'] }));
+    expect(useEditor.getState().breakdownLink).toBeNull();
+    expect(container.innerHTML).toBe('');
+  });
+
+  it('forgets the pin when closed, and folds to its head', () => {
+    const { container } = render(<Harness />);
+    act(() => showBreakdown('C3'));
+    fireEvent.click(container.querySelector('[data-action="collapse-breakdown"]')!);
+    expect(container.querySelector('[data-segment]')).toBeNull();
+    expect(container.querySelector('h2')!.textContent).toContain('C3');
+    fireEvent.click(container.querySelector('[data-action="collapse-breakdown"]')!);
+    expect(container.querySelector('[data-segment]')).not.toBeNull();
+    fireEvent.click(container.querySelector('[data-action="pin-breakdown"]')!);
+    fireEvent.click(container.querySelector('[data-action="close-breakdown"]')!);
+    expect(useBreakdownView.getState().pinned).toBe(false);
+    act(() => showBreakdown('C3'));
+    act(() => useEditor.getState().select({ nodes: [], links: ['C1'] }));
+    expect(useEditor.getState().breakdownLink).toBe('C1');
   });
 });

@@ -29,7 +29,48 @@ describe('circuit schedule', () => {
     expect(row.textContent).toContain('✗');
     expect(row.textContent).toContain('FAIL');
     expect(row.querySelector('[data-status-badge="fail"]')).not.toBeNull();
-    expect(byHook<HTMLElement>(container, 'data-schedule-row', 'C1').textContent).toContain('47.0 %');
+    // Bare numbers in the cells; the unit is in the column head.
+    const ratio = byHook<HTMLElement>(container, 'data-schedule-row', 'C1').querySelector('.lwp-cell-ratio')!;
+    expect(ratio.textContent).toBe('47.0');
+    expect(byHook(container, 'data-unit', 'ratio').textContent).toBe('%');
+  });
+
+  it('gives every column of numbers its unit in the head', () => {
+    const { container } = render(<SchedulePanel />);
+    const units = Object.fromEntries(
+      [...container.querySelectorAll('[data-unit]')].map((el) => [el.getAttribute('data-unit'), el.textContent!.trim()]),
+    );
+    expect(units).toMatchObject({
+      cable: 'mm²', length: 'm', device: 'In A', rcd: 'mA', loop: 'Ω', limit: 'Ω', ia: 'A', treq: 's', maxLength: 'm', ratio: '%',
+    });
+    // Text columns carry none.
+    for (const key of ['id', 'name', 'from', 'to', 'role', 'status']) expect(units[key]).toBe('');
+    // C1 has a 30 mA RCD: the cell says 30 under "mA".
+    const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');
+    const rcdCell = row.children[[...container.querySelectorAll('thead th')].findIndex((th) => th.querySelector('[data-sort="rcd"]'))]!;
+    expect(rcdCell.textContent).toBe('30');
+  });
+
+  it('shows the id as text, not as an input (ids are renamed in the details panel)', () => {
+    const { container } = render(<SchedulePanel />);
+    const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');
+    const id = byHook<HTMLElement>(row, 'data-cell', 'id');
+    expect(id.tagName).toBe('TD');
+    expect(id.textContent).toBe('C1');
+    expect(id.querySelector('input')).toBeNull();
+    expect(id.getAttribute('title')).toMatch(/details panel/);
+    // A click on it selects the row, and changes nothing.
+    fireEvent.click(id);
+    expect(useEditor.getState().selection.links).toEqual(['C1']);
+    expect(useEditor.getState().canUndo).toBe(false);
+  });
+
+  it('gives the full name and the node names on hover', () => {
+    const { container } = render(<SchedulePanel />);
+    const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');
+    expect(byHook(row, 'data-cell', 'name').getAttribute('title')).toBe('Kitchen power');
+    const nodes = [...row.querySelectorAll('.lwp-cell-node')].map((td) => td.getAttribute('title'));
+    expect(nodes).toEqual(['MSB — Main switchboard', 'P1 — Kitchen']);
   });
 
   it('sorts by another column on a click of its head, and flips on a second click', () => {

@@ -6,6 +6,7 @@ import { useMemo } from 'react';
 import { loopBreakdown, resolveRules, type Breakdown, type Job } from '../../../../engine/index.js';
 import { selectResult, useEditor } from '../../store/index.js';
 import { closeBreakdown } from '../actions.js';
+import { useBreakdownView } from './follow.js';
 import { StatusBadge } from '../details/CircuitResults.js';
 import { ohms, percent } from '../format.js';
 
@@ -50,17 +51,17 @@ export function BreakdownView({ linkId }: { linkId: string }) {
     <div className="lwp-breakdown-body" data-breakdown={linkId}>
       <p className="lwp-breakdown-method">
         {known
-          ? 'Source impedance known: the whole loop Zs is compared with the limit.'
-          : `Source unknown: the circuit from its protecting device may use ${percent(share)} of the loop budget; the drawn links before the device are tested against the rest.`}
+          ? 'Source impedance known: the whole loop Zs against the limit.'
+          : `Source unknown: the circuit from its device may use ${percent(share)} of the limit; the drawn links before the device are tested against the rest.`}
       </p>
       <ol className="lwp-bars">
         {segments.map((s) => (
           <li key={`${s.kind}-${s.id}`} className={s.upstream ? 'lwp-bar lwp-bar-upstream' : 'lwp-bar'}
             data-segment={s.id} data-segment-kind={s.kind} data-upstream={s.upstream ? 'true' : 'false'}
             data-r={s.r} data-x={s.x} data-z={s.z} title={`R ${s.r.toFixed(4)} Ω, X ${s.x.toFixed(4)} Ω`}>
-            <span className="lwp-bar-label">
-              {s.label}
-              {s.upstream ? <em className="lwp-bar-tag"> upstream (before the device)</em> : null}
+            <span className="lwp-bar-label" title={s.label}>
+              <span className="lwp-bar-name">{s.label}</span>
+              {s.upstream ? <em className="lwp-bar-tag" title="Upstream: lies before the protecting device">upstream</em> : null}
             </span>
             <span className="lwp-bar-track" aria-hidden="true">
               <span className="lwp-bar-fill" style={{ width: `${Math.min(100, (s.z / scale) * 100)}%` }} />
@@ -94,11 +95,14 @@ export function BreakdownView({ linkId }: { linkId: string }) {
         {result && result.ratio !== null ? ` — ratio ${percent(result.ratio)}` : ''}
       </p>
       {result && result.notes.length > 0 ? (
-        <ul className="lwp-results-notes">
-          {result.notes.map((n, i) => (
-            <li key={i}>{n}</li>
-          ))}
-        </ul>
+        <details className="lwp-breakdown-notes">
+          <summary>Notes ({result.notes.length})</summary>
+          <ul className="lwp-results-notes">
+            {result.notes.map((n, i) => (
+              <li key={i}>{n}</li>
+            ))}
+          </ul>
+        </details>
       ) : null}
     </div>
   );
@@ -107,17 +111,47 @@ export function BreakdownView({ linkId }: { linkId: string }) {
 export function BreakdownPanel() {
   const linkId = useEditor((s) => s.breakdownLink);
   const name = useEditor((s) => (s.breakdownLink ? s.job.links.find((l) => l.id === s.breakdownLink)?.name : undefined));
+  const status = useEditor((s) => (s.breakdownLink ? s.resultById[s.breakdownLink]?.status : undefined));
+  const pinned = useBreakdownView((v) => v.pinned);
+  const collapsed = useBreakdownView((v) => v.collapsed);
   if (!linkId) return null;
+  const title = `Loop breakdown: ${linkId}${name ? ` — ${name}` : ''}`;
+  const set = useBreakdownView.getState().set;
   return (
-    <section className="lwp-panel lwp-breakdown" data-panel="breakdown" aria-label={`Loop breakdown of ${linkId}`}>
-      <header className="lwp-panel-head">
-        <h2 className="lwp-panel-title">Loop breakdown: {linkId}{name ? ` — ${name}` : ''}</h2>
-        <button type="button" className="lwp-button" data-action="close-breakdown" aria-label="Close the loop breakdown"
-          onClick={closeBreakdown}>
-          ✕ Close
-        </button>
+    <section className={`lwp-panel lwp-breakdown${collapsed ? ' lwp-breakdown-collapsed' : ''}`} data-panel="breakdown"
+      data-pinned={pinned ? 'true' : 'false'} data-collapsed={collapsed ? 'true' : 'false'} aria-label={`Loop breakdown of ${linkId}`}>
+      <header className="lwp-panel-head lwp-breakdown-head">
+        <h2 className="lwp-panel-title" title={title}>
+          <span className="lwp-breakdown-kicker">Loop breakdown</span>
+          <span className="lwp-breakdown-title-line">
+            <span className="lwp-breakdown-title-text">{linkId}{name ? ` — ${name}` : ''}</span>
+            {status ? <StatusBadge status={status} /> : null}
+          </span>
+        </h2>
+        <div className="lwp-breakdown-actions">
+          <button type="button" className={pinned ? 'lwp-button lwp-button-small lwp-button-on' : 'lwp-button lwp-button-small'}
+            data-action="pin-breakdown" aria-pressed={pinned}
+            title={pinned ? `Unpin: follow the selected circuit again` : `Pin: keep showing ${linkId} when another circuit is selected`}
+            onClick={() => set({ pinned: !pinned })}>
+            {pinned ? '📌 Pinned' : 'Pin'}
+          </button>
+          <button type="button" className="lwp-button lwp-button-small" data-action="collapse-breakdown" aria-expanded={!collapsed}
+            title={collapsed ? 'Unfold the loop breakdown' : 'Fold the loop breakdown to its title'}
+            onClick={() => set({ collapsed: !collapsed })}>
+            {collapsed ? '▴ Show' : '▾ Fold'}
+          </button>
+          <button type="button" className="lwp-button lwp-button-small" data-action="close-breakdown"
+            aria-label="Close the loop breakdown" title="Close the loop breakdown and clear the traced path (Esc)" onClick={closeBreakdown}>
+            ✕
+          </button>
+        </div>
+        <p className="lwp-breakdown-mode" data-breakdown-mode={pinned ? 'pinned' : 'follows'}>
+          {pinned
+            ? `📌 Pinned to ${linkId}: selecting another circuit leaves it here.`
+            : 'Follows the selected circuit (sheet or schedule). Pin to keep this one.'}
+        </p>
       </header>
-      <BreakdownView linkId={linkId} />
+      {collapsed ? null : <BreakdownView linkId={linkId} />}
     </section>
   );
 }

@@ -19,6 +19,8 @@ interface Common {
   attr?: HookAttr;
   hint?: ReactNode;
   disabled?: boolean;
+  /** Tooltip on the input, e.g. the full text where the box is too narrow to show it. */
+  title?: string;
 }
 
 function hook(attr: HookAttr, field: string): Record<string, string> {
@@ -110,6 +112,7 @@ export function NumberField(props: NumberFieldProps) {
         aria-invalid={error ? true : undefined}
         value={text}
         placeholder={props.placeholder}
+        title={props.title}
         list={props.list}
         disabled={props.disabled}
         {...hook(attr, field)}
@@ -146,6 +149,7 @@ export function TextField(props: TextFieldProps) {
     'aria-invalid': error ? true : undefined,
     value: text,
     placeholder: props.placeholder,
+    title: props.title,
     disabled: props.disabled,
     onBlur: run,
     ...hook(attr, field),

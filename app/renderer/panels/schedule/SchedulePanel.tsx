@@ -19,6 +19,8 @@ const FALLBACK_VIEW_HEIGHT = 600;
 const SIZES_ID = 'lwp-sizes-schedule';
 /** Ratio and status stay in view at the right edge while the table scrolls sideways. */
 const STICKY: Partial<Record<string, string>> = { ratio: 'lwp-sticky-ratio', status: 'lwp-sticky-status' };
+/** Columns of bare numbers, right-aligned under a right-aligned head. */
+const NUMERIC = new Set(['rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength', 'ratio']);
 
 function filterLabel(f: StatusFilter): string {
   return f === 'all' ? 'all' : `${STATUS_LOOK[f].symbol} ${STATUS_LOOK[f].word}`;
@@ -119,14 +121,17 @@ export function SchedulePanel() {
             <tr>
               {COLUMNS.map((c) => (
                 <th key={c.key} scope="col"
-                  className={`${c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}${STICKY[c.key] ? ` ${STICKY[c.key]}` : ''}`}
+                  className={`${c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}${STICKY[c.key] ? ` ${STICKY[c.key]}` : ''}${NUMERIC.has(c.key) ? ' lwp-num-head' : ''}`}
                   aria-sort={sort.key === c.key ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none'}>
-                  <button type="button" className="lwp-sort" data-sort={c.key} title={c.title}
+                  <button type="button" className="lwp-sort" data-sort={c.key} title={`${c.title}. Click to sort.`}
                     onClick={() => setSort((s) => nextSort(s, c.key))}>
-                    {c.label}
-                    <span aria-hidden="true" className="lwp-sort-mark">
-                      {sort.key === c.key ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}
+                    <span className="lwp-sort-label">
+                      {c.label}
+                      <span aria-hidden="true" className="lwp-sort-mark">
+                        {sort.key === c.key ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}
+                      </span>
                     </span>
+                    <span className="lwp-col-unit" data-unit={c.key}>{c.unit ?? '\u00a0'}</span>
                   </button>
                 </th>
               ))}

@@ -2,14 +2,31 @@
 // Memoised and subscribed to its own link and result, so an edit re-renders only the rows it changes.
 
 import { memo } from 'react';
-import { deviceMark } from '../../../../engine/index.js';
-import { selectLink, selectResult, useEditor } from '../../store/index.js';
+import { deviceMark, type Device } from '../../../../engine/index.js';
+import { selectLink, selectNode, selectResult, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { StatusBadge } from '../details/CircuitResults.js';
 import { NumberField, TextField } from '../fields/fields.js';
-import { ROLE_SHORT, ROLE_WORD, num, ohms, percent } from '../format.js';
+import { ROLE_SHORT, ROLE_WORD, num, ohms, ohmsValue, percentValue } from '../format.js';
 
 export const ROW_HEIGHT = 34;
+
+const MATERIAL_WORD: Record<string, string> = { Cu: 'copper', Al: 'aluminium' };
+
+/** The device without its rating (the rating is the cell's input beside it); a label is kept whole. */
+function deviceKind(device: Device): string {
+  if (device.label) return device.label;
+  switch (device.type) {
+    case 'mcb':
+      return `MCB ${device.curve}`;
+    case 'adjustable':
+      return 'adj.';
+    case 'curve':
+      return 'curve';
+    case 'fixed':
+      return 'fixed';
+  }
+}
 
 /**
  * Selects the row's link and asks the sheet to centre it. A click into a cell of the row that is
@@ -27,6 +44,9 @@ function selectRow(id: string, target: EventTarget | null) {
 export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: { id: string; selected: boolean; sizesId: string }) {
   const link = useEditor(selectLink(id));
   const r = useEditor(selectResult(id));
+  // Indexed by id in the store's selectors, so this stays cheap on a large job.
+  const fromName = useEditor(selectNode(link?.from ?? ''))?.name;
+  const toName = useEditor(selectNode(link?.to ?? ''))?.name;
   if (!link) return null;
   const set = (field: string) => (v: unknown) => editLink(id, field, v);
   const known = r?.method === 'known-source';
@@ -42,53 +62,56 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
         if (e.key === 'Enter' && e.target === e.currentTarget) selectRow(id, null);
       }}
     >
-      <td className="lwp-cell-id">
-        <TextField compact attr="data-cell" field="id" label={`Id of ${id}`} value={id} emptyAs="empty"
-          onCommit={(v) => editLink(id, 'id', v ?? '', `rename ${id}`)} />
-      </td>
+      {/* The id is renamed in the details panel only: renaming in a schedule is too easy to do by accident. */}
+      <td className="lwp-cell-id" data-cell="id" title={`${id} (rename it in the details panel)`}>{id}</td>
       <td className="lwp-cell-name">
-        <TextField compact attr="data-cell" field="name" label={`Name of ${id}`} value={link.name} onCommit={set('name')} />
+        <TextField compact attr="data-cell" field="name" label={`Name of ${id}`} value={link.name} title={link.name}
+          onCommit={set('name')} />
       </td>
-      <td>{link.from}</td>
-      <td>{link.to}</td>
+      <td className="lwp-cell-node" title={fromName ? `${link.from} — ${fromName}` : link.from}>{link.from}</td>
+      <td className="lwp-cell-node" title={toName ? `${link.to} — ${toName}` : link.to}>{link.to}</td>
       <td className="lwp-cell-role" title={r ? ROLE_WORD[r.role] : undefined}>{r ? ROLE_SHORT[r.role] : '—'}</td>
-      <td className="lwp-cell-cable">
-        <NumberField compact attr="data-cell" field="cable.active" label={`Active size of ${id}`} unit="mm²" above={0}
-          list={sizesId} value={link.cable.active} onCommit={set('cable.active')} />
-        <span className="lwp-slash">/</span>
-        <NumberField compact attr="data-cell" field="cable.earth" label={`Earth size of ${id}`} unit="mm²" above={0}
-          list={sizesId} value={link.cable.earth} onCommit={set('cable.earth')} />
-        <span className="lwp-material">{link.cable.material}</span>
+      <td>
+        <span className="lwp-cell-cable">
+          <NumberField compact attr="data-cell" field="cable.active" label={`Active size of ${id}`} unit="mm²" above={0}
+            list={sizesId} value={link.cable.active} onCommit={set('cable.active')} />
+          <span className="lwp-slash" aria-hidden="true">/</span>
+          <NumberField compact attr="data-cell" field="cable.earth" label={`Earth size of ${id}`} unit="mm²" above={0}
+            list={sizesId} value={link.cable.earth} onCommit={set('cable.earth')} />
+          <span className="lwp-material" title={MATERIAL_WORD[link.cable.material] ?? link.cable.material}>{link.cable.material}</span>
+        </span>
       </td>
       <td className="lwp-cell-length">
         <NumberField compact attr="data-cell" field="cable.length" label={`Length of ${id}`} unit="m" min={0}
           value={link.cable.length} onCommit={set('cable.length')} />
       </td>
-      <td className="lwp-cell-device">
+      <td>
         {link.device ? (
-          <>
-            <span className="lwp-mark">{deviceMark(link.device)}</span>
+          <span className="lwp-cell-device">
+            <span className="lwp-mark" title={deviceMark(link.device)}>{deviceKind(link.device)}</span>
             <NumberField compact attr="data-cell" field="device.rating" label={`Device rating of ${id}`} unit="A" above={0}
               value={link.device.rating} onCommit={set('device.rating')} />
-          </>
+          </span>
         ) : (
-          <span className="lwp-muted">{r?.protectedBy && r.protectedBy !== id ? `via ${r.protectedBy}` : 'none'}</span>
+          <span className="lwp-muted" title={r?.protectedBy && r.protectedBy !== id ? `Protected by the device on ${r.protectedBy}` : 'No protective device: unprotected'}>
+            {r?.protectedBy && r.protectedBy !== id ? `via ${r.protectedBy}` : 'none'}
+          </span>
         )}
       </td>
-      <td>{link.rcd ? `${num(link.rcd.sensitivity * 1000, 1)} mA` : '—'}</td>
+      <td className="lwp-num">{link.rcd ? num(link.rcd.sensitivity * 1000, 1) : '—'}</td>
       <td className="lwp-num">
-        {known || !r ? ohms(r?.zs) : (
+        {known || !r ? ohmsValue(r?.zs) : (
           <>
-            {ohms(r.own)}
-            <span className="lwp-sub" title="upstream loop"> ↑{ohms(r.upstream)}</span>
+            {ohmsValue(r.own)}
+            <span className="lwp-sub" title={`upstream loop ${ohms(r.upstream)}`}> ↑{ohmsValue(r.upstream)}</span>
           </>
         )}
       </td>
-      <td className="lwp-num">{ohms(r?.limit)}</td>
+      <td className="lwp-num">{ohmsValue(r?.limit)}</td>
       <td className="lwp-num">{num(r?.tripCurrent, 1)}</td>
       <td className="lwp-num">{num(r?.requiredTime, 2)}</td>
       <td className="lwp-num">{num(r?.maxLength, 1)}</td>
-      <td className="lwp-num lwp-cell-ratio lwp-sticky-ratio">{percent(r?.ratio)}</td>
+      <td className="lwp-num lwp-cell-ratio lwp-sticky-ratio">{percentValue(r?.ratio)}</td>
       <td className="lwp-sticky-status">{r ? <StatusBadge status={r.status} /> : '—'}</td>
     </tr>
   );

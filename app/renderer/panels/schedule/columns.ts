@@ -16,6 +16,8 @@ export type ColumnKey =
 export interface Column {
   key: ColumnKey;
   label: string;
+  /** The unit of every value in the column, shown under the label (cells carry bare numbers). */
+  unit?: string;
   title: string;
   /** Input columns come from the job; result columns from the engine. */
   group: 'input' | 'result';
@@ -40,19 +42,19 @@ const r = (row: ScheduleRowData) => row.result;
 export const COLUMNS: readonly Column[] = [
   { key: 'id', label: 'Id', title: 'Link id', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.id },
   { key: 'name', label: 'Name', title: 'Circuit name', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.name ?? null },
-  { key: 'from', label: 'From', title: 'Node at the origin', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.from },
-  { key: 'to', label: 'To', title: 'Node at the far end', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.to },
+  { key: 'from', label: 'From', title: 'Node at the origin (id)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.from },
+  { key: 'to', label: 'To', title: 'Node at the far end (id)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.to },
   { key: 'role', label: 'Role', title: 'Consumer mains, submain or final subcircuit', group: 'input', firstDirection: 'asc', sortValue: (x) => r(x)?.role ?? null },
-  { key: 'cable', label: 'Cable mm²', title: 'Active / earth conductor size (mm²) and material', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.cable.active },
-  { key: 'length', label: 'Length m', title: 'Route length (m)', group: 'input', firstDirection: 'desc', sortValue: (x) => x.link.cable.length },
-  { key: 'device', label: 'Device A', title: 'Protective device and its rating In (A)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.rating ?? null },
-  { key: 'rcd', label: 'RCD', title: 'Residual-current device sensitivity (mA)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.rcd?.sensitivity ?? null },
-  { key: 'loop', label: 'Zs / own Ω', title: 'Zs at the far end (source known), or own loop with the upstream loop below (source unknown)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.zs ?? r(x)?.own ?? null },
-  { key: 'limit', label: 'Limit Ω', title: 'The loop limit for this circuit', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.limit ?? null },
-  { key: 'ia', label: 'Ia A', title: 'Trip current Ia', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.tripCurrent ?? null },
-  { key: 'treq', label: 't req s', title: 'Required disconnection time', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.requiredTime ?? null },
-  { key: 'maxLength', label: 'Max m', title: 'Maximum length for this link', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
-  { key: 'ratio', label: 'Ratio', title: 'Share of the limit used (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
+  { key: 'cable', label: 'Cable', unit: 'mm²', title: 'Active / earth conductor size (mm²) and material', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.cable.active },
+  { key: 'length', label: 'Length', unit: 'm', title: 'Route length (m)', group: 'input', firstDirection: 'desc', sortValue: (x) => x.link.cable.length },
+  { key: 'device', label: 'Device', unit: 'In A', title: 'Protective device and its rated current In (A)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.rating ?? null },
+  { key: 'rcd', label: 'RCD', unit: 'mA', title: 'Residual-current device sensitivity (mA)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.rcd?.sensitivity ?? null },
+  { key: 'loop', label: 'Zs / own', unit: 'Ω', title: 'Zs at the far end (source known), or own loop with the upstream loop below (source unknown)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.zs ?? r(x)?.own ?? null },
+  { key: 'limit', label: 'Limit', unit: 'Ω', title: 'The loop impedance limit for this circuit (Ω)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.limit ?? null },
+  { key: 'ia', label: 'Ia', unit: 'A', title: 'Current Ia that disconnects the device in the required time (A)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.tripCurrent ?? null },
+  { key: 'treq', label: 't req', unit: 's', title: 'Required disconnection time (s)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.requiredTime ?? null },
+  { key: 'maxLength', label: 'Max length', unit: 'm', title: 'Maximum length of this link for its loop to stay within the limit (m)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
+  { key: 'ratio', label: 'Ratio', unit: '%', title: 'Loop impedance as a share of its limit, % (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
   { key: 'status', label: 'Status', title: 'fail, relies on RCD, pass, unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.status] : null) },
 ];
 
