@@ -31,4 +31,7 @@ for (const size of [200, 2000, 10000]) {
     failed = true;
   }
 }
+// The editor in headless Chromium on 2,000 circuits (tests/bench/ui.ts); skipped without Chromium.
+const { runUiBench } = await import('./ui.js');
+if (await runUiBench()) failed = true;
 process.exit(failed ? 1 : 0);
