@@ -26,6 +26,19 @@ function linkPrefix(job: ReturnType<typeof useEditor.getState>['job'], from: str
   return 'SM';
 }
 
+// Positions dragged since the last frame, keyed by node id.
+const pendingMoves = new Map<string, { id: string; at: { x: number; y: number } }>();
+let pendingFrame: number | null = null;
+
+function flushMoves(): void {
+  if (pendingFrame !== null && typeof cancelAnimationFrame === 'function') cancelAnimationFrame(pendingFrame);
+  pendingFrame = null;
+  if (pendingMoves.size === 0) return;
+  const moves = [...pendingMoves.values()];
+  pendingMoves.clear();
+  useEditor.getState().moveLive(moves);
+}
+
 export interface SheetProps {
   onContextMenu(at: { x: number; y: number }): void;
 }
@@ -114,8 +127,14 @@ export function Sheet({ onContextMenu }: SheetProps) {
         else sel.delete(c.id);
       }
     }
-    if (live.length > 0) s.moveLive(live);
+    // Live positions reach the store at most once a frame; the drop flushes the last of them.
+    for (const m of live) pendingMoves.set(m.id, m);
+    if (live.length > 0 && !done) {
+      if (typeof requestAnimationFrame === 'function') pendingFrame ??= requestAnimationFrame(flushMoves);
+      else flushMoves();
+    }
     if (done) {
+      flushMoves();
       const job = useEditor.getState().job;
       const ids = new Set(changes.map((c) => ('id' in c ? c.id : '')));
       const moves = job.nodes.filter((n) => ids.has(n.id)).map((n) => ({ id: n.id, at: n.at ?? { x: 0, y: 0 } }));
