@@ -132,7 +132,7 @@ export function jobArb(opts: TreeOptions = {}): fc.Arbitrary<Obj> {
         source: opts.source ?? sourceArb,
         nodes: fc.tuple(...nodeArbs),
         links: fc.tuple(...linkArbs),
-        extra: fc.dictionary(fc.string({ minLength: 1, maxLength: 6 }).map((k) => `x_${k}`), fc.jsonValue({ maxDepth: 2 }), { maxKeys: 3 }),
+        extra: fc.dictionary(fc.string({ minLength: 1, maxLength: 6 }).map((k) => `x_${k}`), fc.jsonValue({ maxDepth: 2 }).map((v) => JSON.parse(JSON.stringify(v)) as unknown) /* as read from a file: JSON has no -0 */, { maxKeys: 3 }),
       })
       .map(({ rules, source, nodes, links, extra }) => ({
         format: 'loopwright.job',
