@@ -10,6 +10,7 @@ export default defineConfig({
           name: 'engine',
           environment: 'node',
           include: ['tests/engine/**/*.test.ts', 'tests/cli/**/*.test.ts', 'tests/report/**/*.test.ts', 'tests/main/**/*.test.ts'],
+          setupFiles: ['tests/engine/setup.ts'],
           testTimeout: 60_000,
         },
       },
