@@ -19,7 +19,7 @@ const LABEL_X = 2;
 const LABEL_W = BLOCK.right - LABEL_X;
 const FIRST_BASELINE = -15.1;
 
-interface Ctx {
+export interface Ctx {
   job: Job;
   plan: DiagramPlan;
   byLink: Map<string, CircuitResult>;
@@ -34,7 +34,7 @@ interface Ctx {
   sheetOf: (tile: number) => number;
 }
 
-function linkStroke(ctx: Ctx, link: Link): Stroke {
+export function linkStroke(ctx: Ctx, link: Link): Stroke {
   if (ctx.worstLinks.has(link.id)) return stroke(0.9);
   if (ctx.byLink.get(link.id)?.status === 'unchecked') return stroke(0.35, INK, [1.2, 0.8]);
   return stroke(0.35);
@@ -46,7 +46,7 @@ function at(ctx: Ctx, id: string, tile: Tile): { x: number; y: number } {
 }
 
 /** The five label lines of a link, right of its drop line, above its far node at (x, y). */
-function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
+export function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
   const c = ctx.byLink.get(link.id);
   const items: Item[] = [];
   const lx = x + LABEL_X;
@@ -80,8 +80,11 @@ function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
   return items;
 }
 
-/** The node's symbol and its id, name and one more line to the right. */
-function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number): Item[] {
+/**
+ * The node's symbol and its id, name and one more line to the right. With `extra` (a stub or a
+ * continued head), the name keeps to the first line and `extra` follows it in bold.
+ */
+export function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number, extra?: string): Item[] {
   const items: Item[] = nodeSymbol(node.kind, x, y);
   const nx = x + SYMBOL_HALF[node.kind].w + 1;
   const width = x + BLOCK.right - nx;
@@ -99,16 +102,21 @@ function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number): Item[] {
       first = candidate;
       used++;
     }
-    if (first !== '') items.push(text(nx + idW, y + 0.8, first, LABEL_TEXT));
     const rest = words.slice(used).join(' ');
-    if (rest !== '') {
+    if (extra !== undefined) first = truncate(name, 'regular', LABEL_TEXT, width - idW);
+    if (first !== '') items.push(text(nx + idW, y + 0.8, first, LABEL_TEXT));
+    if (rest !== '' && extra === undefined) {
       items.push(text(nx, y + 0.8 + LH, truncate(rest, 'regular', LABEL_TEXT, width), LABEL_TEXT));
       lineNo = 2;
     }
   }
+  if (extra !== undefined) {
+    items.push(text(nx, y + 0.8 + lineNo * LH, truncate(extra, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
+    lineNo++;
+  }
   if (ctx.worstEnd === node.id) {
     items.push(text(nx, y + 0.8 + lineNo * LH, truncate('worst fault path', 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
-  } else if (node.kind === 'supply' && lineNo < 3) {
+  } else if (node.kind === 'supply' && lineNo < 3 && extra === undefined) {
     items.push(text(nx, y + 0.8 + lineNo * LH, truncate(describeSourceShort(node.source, ctx.u0), 'regular', LABEL_TEXT, width), LABEL_TEXT, 'regular', 'start', GREY));
   }
   return items;

@@ -7,6 +7,8 @@ import type { Job } from '../model/types.js';
 import { assumptionPages, BASIS_TITLE } from './assumptions.js';
 import { diagramContext, drawTile } from './diagram.js';
 import { planDiagram } from './diagram-plan.js';
+import { drawPiece } from './diagram-sheet.js';
+import { planSections } from './diagram-sections.js';
 import { GREY, text } from './draw.js';
 import { legend } from './legend.js';
 import { contentBox, paperFor } from './paper.js';
@@ -24,22 +26,40 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
   const pages: Array<{ kind: SheetKind; title: string; items: Item[] }> = [];
 
   // Diagram: the legend along the foot of the content area, the drawing above it.
-  const probe = legend({ x: content.x, y: 0, w: content.w, h: 0 }, ['']);
+  const sectionNote = (auto: boolean): string =>
+    'Too large for one sheet with text of 2 mm or more, so drawn board by board in reading order from the supply, circuits in the order ' +
+    `${auto ? 'of the job file' : 'drawn (left to right)'}. A board drawn as a stub says the sheet it continues on; each board's ` +
+    'own part starts with the link that feeds it, repeated.';
+  // The legend's height with the longest note it may carry, so the drawing area is known first.
+  const probe = legend({ x: content.x, y: 0, w: content.w, h: 0 }, [sectionNote(true)]);
   const legendTop = content.y + content.h - probe.height;
   const area = { x: content.x, y: content.y + MARK_BAND, w: content.w, h: legendTop - content.y - 2 * MARK_BAND - 2 };
   const plan = planDiagram(job, area);
-  const tiles = Math.max(plan.tiles.length, 1);
-  const notes = [
-    plan.auto ? 'Positions arranged automatically (the job has nodes without a drawn position).' : 'Positions as drawn in the job.',
-    tiles > 1 ? `Split over ${tiles} sheets so that no text is smaller than 2 mm; arrows at the edges name the sheet a link continues on.` : '',
-  ].filter((n) => n !== '');
   const ctx = diagramContext(job, results, plan, (t) => t + 1, rules.voltage.value);
-  for (let t = 0; t < tiles; t++) {
-    const items: Item[] = plan.tiles.length === 0
-      ? [text(area.x + area.w / 2, area.y + area.h / 2, 'The job has no nodes to draw.', 4, 'bold', 'middle', GREY)]
-      : drawTile(ctx, t);
+  // Too large for one sheet at the user's positions: one section per board, packed in reading
+  // order from the supply; cutting the drawing into tiles is the last resort.
+  const sections = plan.tiles.length > 1
+    ? planSections(job, { x: content.x, y: content.y, w: content.w, h: legendTop - content.y - 3 })
+    : null;
+  const count = sections !== null ? sections.sheets.length : Math.max(plan.tiles.length, 1);
+  const notes = [
+    sections !== null
+      ? sectionNote(plan.auto)
+      : plan.auto ? 'Positions arranged automatically (the job has nodes without a drawn position).' : 'Positions as drawn in the job.',
+    sections === null && count > 1 ? `Split over ${count} sheets so that no text is smaller than 2 mm; arrows at the edges name the sheet a link continues on.` : '',
+  ].filter((n) => n !== '');
+  for (let t = 0; t < count; t++) {
+    let items: Item[];
+    let what = '';
+    if (sections !== null) {
+      const pieces = sections.sheets[t] ?? [];
+      items = pieces.flatMap((p) => drawPiece(ctx, sections, p, t, (i) => i + 1));
+      what = `: ${pieces.map((p) => `${p.section.spine.map((n) => n.id).join(', ')}${p.first ? '' : ' (cont.)'}`).join('; ')}`;
+    } else if (plan.tiles.length === 0) {
+      items = [text(area.x + area.w / 2, area.y + area.h / 2, 'The job has no nodes to draw.', 4, 'bold', 'middle', GREY)];
+    } else items = drawTile(ctx, t);
     items.push(...legend({ x: content.x, y: legendTop, w: content.w, h: probe.height }, notes).items);
-    pages.push({ kind: 'diagram', title: tiles > 1 ? `Single-line diagram, part ${t + 1} of ${tiles}` : 'Single-line diagram', items });
+    pages.push({ kind: 'diagram', title: count > 1 ? `Single-line diagram, part ${t + 1} of ${count}${what}` : 'Single-line diagram', items });
   }
 
   const schedule = schedulePages(job, results, content);

@@ -10,7 +10,7 @@ import type { Item } from './types.js';
 
 const T = 2.2;
 const LH = 2.75;
-const COL_MIN = 62;
+const COL_MIN = 52;
 
 type Glyph = (x: number, y: number) => Item[];
 
@@ -65,7 +65,7 @@ export function legend(box: Box, notes: string[]): { items: Item[]; height: numb
       if (e === undefined) break;
       const x = box.x + 1.5 + c * colW;
       const words = `${e.bold !== undefined ? `${e.bold}: ` : ''}${e.label}`;
-      const lines = wrap(words, 'regular', T, colW - 10, 2);
+      const lines = wrap(words, 'regular', T, colW - 10, 3);
       rowLines = Math.max(rowLines, lines.length);
       const cy = y + LH * 0.5 + 0.9;
       items.push(...e.glyph(x, cy));

@@ -6,6 +6,7 @@ import { analyse, CAUTION, type Job } from '../../engine/index.js';
 import { layoutReport, MIN_TEXT_MM, sheetToSvg, type ReportOptions, type Sheet } from '../../engine/report/index.js';
 import { demoJob, overlappingTexts, textBox, texts } from './helpers.js';
 import { generatedJob } from './generate.js';
+import { generateJob } from '../bench/generate.js';
 
 const PAPERS: ReportOptions[] = [
   {},
@@ -18,15 +19,13 @@ function allText(sheets: Sheet[]): string {
   return sheets.flatMap((s) => texts(s).map((t) => t.text)).join('\n');
 }
 
-// Papers on which the text-overlap check is asserted. Known limitation: the generated drawn job
-// on papers smaller than A3 landscape still places some edge continuation marks over labels.
-const jobs: Array<[string, () => Job, ReportOptions[]]> = [
-  ['demo', demoJob, PAPERS],
-  ['generated, drawn', () => generatedJob(), [{}]],
-  ['generated, arranged automatically, unknown source', () => generatedJob({ drawn: false, unknownSource: true }), PAPERS],
+const jobs: Array<[string, () => Job]> = [
+  ['demo', demoJob],
+  ['generated, drawn', () => generatedJob()],
+  ['generated, arranged automatically, unknown source', () => generatedJob({ drawn: false, unknownSource: true })],
 ];
 
-describe.each(jobs)('layoutReport: %s', (_name, make, overlapPapers) => {
+describe.each(jobs)('layoutReport: %s', (_name, make) => {
   const job = make();
   const results = analyse(job);
 
@@ -41,7 +40,7 @@ describe.each(jobs)('layoutReport: %s', (_name, make, overlapPapers) => {
         expect(b.y0).toBeGreaterThanOrEqual(9.9);
         expect(b.y1).toBeLessThanOrEqual(sheet.heightMm - 9.9);
       }
-      if (overlapPapers.includes(options)) expect(overlappingTexts(sheet), `${sheet.title}`).toEqual([]);
+      expect(overlappingTexts(sheet), `${sheet.title}`).toEqual([]);
     }
   });
 
@@ -84,13 +83,38 @@ describe('layoutReport: paper', () => {
     expect(layoutReport(job, r, { paper: 'A4', orientation: 'portrait' })[0]).toMatchObject({ widthMm: 210, heightMm: 297 });
   });
 
-  it('splits a large drawing over several sheets with continuation marks', () => {
-    const job = generatedJob();
-    const sheets = layoutReport(job, analyse(job));
-    const diagram = sheets.filter((s) => s.kind === 'diagram');
-    expect(diagram.length).toBeGreaterThan(1);
-    expect(allText(diagram)).toMatch(/continued on sheet \d+/);
-    expect(allText(diagram)).toMatch(/from sheet \d+/);
+  it.each(PAPERS)('splits a large drawing board by board, the supply first, every stub naming its sheet (%o)', (options) => {
+    for (const job of [generatedJob(), demoJob()]) {
+      const sheets = layoutReport(job, analyse(job), options);
+      const diagram = sheets.filter((s) => s.kind === 'diagram');
+      expect(diagram.length).toBeGreaterThan(1);
+      // Reading order: the supply's sheet comes first.
+      expect(texts(diagram[0]!).map((t) => t.text)).toContain('S1');
+      // Each board drawn as a stub says where it continues, and that sheet is headed by its feed.
+      const boards = job.nodes.filter((n) => n.kind === 'board').map((n) => n.id);
+      diagram.forEach((sheet, i) => {
+        const list = texts(sheet);
+        list.forEach((t, k) => {
+          const m = /^cont\. on sheet (\d+)$/.exec(t.text);
+          if (m === null) return;
+          const id = [...list.slice(0, k)].reverse().find((x) => boards.includes(x.text))?.text;
+          expect(id, `stub before "${t.text}" on sheet ${i + 1}`).toBeDefined();
+          const target = sheets[Number(m[1]) - 1]!;
+          expect(target.kind).toBe('diagram');
+          expect(texts(target).some((x) => x.text.startsWith('fed from') && texts(target).some((y) => y.text === id))).toBe(true);
+        });
+      });
+      expect(allText(diagram)).toMatch(/cont\. on sheet \d+/);
+      expect(allText(diagram)).toMatch(/fed from MSB/);
+    }
+  });
+
+  it('packs the 200-circuit generated job onto few, well-filled diagram sheets', () => {
+    const job = generateJob(200);
+    const diagram = layoutReport(job, analyse(job)).filter((s) => s.kind === 'diagram');
+    // 200 circuits at 25 to 28 per sheet on A3 landscape, plus the supply and main switchboard.
+    expect(diagram.length).toBeLessThanOrEqual(9);
+    for (const link of job.links) expect(allText(diagram).split('\n')).toContain(link.id);
   });
 
   it('lays out a job without nodes', () => {

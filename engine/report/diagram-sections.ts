@@ -1,0 +1,268 @@
+// The diagram split by subtree, for a drawing too large for one sheet at a readable size: one
+// section per board (or supply), its circuits hanging in rows from a bus, every board fed from
+// it drawn as a stub that names the sheet it continues on, and each board's own section headed
+// by a "fed from" stub repeating the link that feeds it. Sections are packed onto sheets in
+// reading order from the supply down; a section too long for the room left continues on the
+// next sheet at a row boundary, its board repeated at the head. Circuits keep the order drawn
+// (left to right), or file order for a job without positions.
+
+import type { Job, JobNode, Link } from '../model/types.js';
+import { BLOCK, BUS } from './diagram-plan.js';
+import type { Box } from './paper.js';
+
+/** Width of one circuit's column (its label and name block plus a gap), mm. */
+export const CW = BLOCK.right - BLOCK.left + 1;
+/** From a node's centre to the centre of the node it feeds, in a column or the spine, mm. */
+export const LEVEL = 32;
+/** From a bus to the centre of the nodes hanging from it, mm (room for the link's label). */
+export const DROP = LEVEL - BUS;
+/** Below a node's centre: its id, name and one more line, mm. */
+export const NODE_BOTTOM = 7.4;
+/** From a section's trunk to its first column, mm. */
+export const GUTTER = 8;
+/** Height of the "fed from" head above a section's root, mm. */
+export const FED_H = 26;
+/** Height of the head of a section continued from an earlier sheet, mm. */
+export const CONT_H = 5;
+const ROW_GAP = 3;
+const PIECE_GAP = 4;
+
+export interface ColumnNode {
+  id: string;
+  /** The link feeding it. */
+  link: Link;
+  /** Leaf slot (0-based, in CW units) within the column, and depth (0 = hangs from the bus). */
+  slot: number;
+  level: number;
+  /** Parent within the column, or null for the column's top node (hangs from the bus). */
+  parent: string | null;
+  /** A board with its own section elsewhere: drawn as a stub naming its sheet. */
+  stub: boolean;
+}
+
+export interface Column {
+  nodes: ColumnNode[];
+  /** Width in leaf slots, and depth in levels. */
+  slots: number;
+  levels: number;
+}
+
+export interface Section {
+  root: string;
+  /** The link feeding the root from another section, if any. */
+  fedBy: Link | null;
+  /** The root and the boards fed one by one below it; the last one's circuits hang in rows. */
+  spine: Array<{ id: string; link: Link | null }>;
+  rows: Column[][];
+  /** Height of each row, bus to bottom, mm. */
+  rowH: number[];
+  w: number;
+}
+
+export interface Piece {
+  section: Section;
+  first: boolean;
+  /** Rows [from, to) of the section on this piece. */
+  from: number;
+  to: number;
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
+export interface SectionPlan {
+  sheets: Piece[][];
+  /** Sheet index (0-based) where each node is drawn in full (a stub's is its own section's). */
+  sheetOf: Map<string, number>;
+}
+
+function order(job: Job, links: Link[], nodes: Map<string, JobNode>): Link[] {
+  const drawn = job.nodes.every((n) => n.at !== undefined);
+  if (!drawn) return links;
+  const idx = new Map(job.links.map((l, i) => [l.id, i]));
+  return [...links].sort((a, b) => {
+    const pa = nodes.get(a.to)?.at ?? { x: 0, y: 0 };
+    const pb = nodes.get(b.to)?.at ?? { x: 0, y: 0 };
+    return pa.x - pb.x || pa.y - pb.y || (idx.get(a.id) ?? 0) - (idx.get(b.id) ?? 0);
+  });
+}
+
+/** Sections in reading order, or null when one cannot fit the area at all. */
+function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
+  const nodes = new Map(job.nodes.map((n) => [n.id, n]));
+  const kids = new Map<string, Link[]>();
+  const feed = new Map<string, Link>();
+  for (const l of job.links) {
+    kids.set(l.from, [...(kids.get(l.from) ?? []), l]);
+    feed.set(l.to, l);
+  }
+  const children = (id: string): Link[] => order(job, kids.get(id) ?? [], nodes);
+  const isBoard = (id: string): boolean => nodes.get(id)?.kind === 'board';
+  const maxCols = Math.floor((area.w - 6 - GUTTER - 32) / CW) + 1;
+  const sections: Section[] = [];
+
+  const column = (top: Link): Column => {
+    const list: ColumnNode[] = [];
+    let slots = 0;
+    let levels = 0;
+    const visit = (link: Link, parent: string | null, level: number): number => {
+      levels = Math.max(levels, level + 1);
+      const stub = isBoard(link.to);
+      const below = stub ? [] : children(link.to);
+      const entry: ColumnNode = { id: link.to, link, slot: slots, level, parent, stub };
+      list.push(entry);
+      if (below.length === 0) slots++;
+      else {
+        const first = slots;
+        below.forEach((k) => visit(k, link.to, level + 1));
+        entry.slot = first;
+      }
+      return entry.slot;
+    };
+    visit(top, null, 0);
+    return { nodes: list, slots, levels };
+  };
+
+  const section = (root: string, fedBy: Link | null, join = inline): boolean => {
+    const spine: Array<{ id: string; link: Link | null }> = [{ id: root, link: null }];
+    let end = root;
+    for (;;) {
+      const k = children(end);
+      const only = k[0];
+      if (!join || k.length !== 1 || only === undefined || !isBoard(only.to)) break;
+      spine.push({ id: only.to, link: only });
+      end = only.to;
+    }
+    const cols = children(end).map(column);
+    if (cols.some((c) => c.slots > maxCols)) return false;
+    // Balanced rows: as few as the width allows, the columns spread evenly over them.
+    const total = cols.reduce((s, c) => s + c.slots, 0);
+    const rowsNeeded = total === 0 ? 0 : Math.ceil(total / maxCols);
+    const rows: Column[][] = [];
+    let current: Column[] = [];
+    let used = 0;
+    const target = rowsNeeded === 0 ? 0 : Math.ceil(total / rowsNeeded);
+    for (const c of cols) {
+      if (current.length > 0 && (used + c.slots > maxCols || used >= target)) {
+        rows.push(current);
+        current = [];
+        used = 0;
+      }
+      current.push(c);
+      used += c.slots;
+    }
+    if (current.length > 0) rows.push(current);
+    const rowH = rows.map((r) => DROP + (Math.max(...r.map((c) => c.levels)) - 1) * LEVEL + NODE_BOTTOM + ROW_GAP);
+    const widest = Math.max(0, ...rows.map((r) => r.reduce((s, c) => s + c.slots, 0)));
+    const w = widest === 0 ? 6 + 32 : 6 + GUTTER + (widest - 1) * CW + 32;
+    const made: Section = { root, fedBy, spine, rows, rowH, w };
+    // A spine so long that its head and first row no longer fit a sheet: each board on its own.
+    if (join && spine.length > 1 && headHeight(made, true) + (rowH[0] ?? 0) > area.h) return section(root, fedBy, false);
+    sections.push(made);
+    for (const r of rows) {
+      for (const c of r) for (const n of c.nodes) if (n.stub && !section(n.id, n.link)) return false;
+    }
+    return true;
+  };
+
+  for (const n of job.nodes) if (!feed.has(n.id) && !section(n.id, null)) return null;
+  return sections;
+}
+
+/** Height of a section's head: the fed-from stub and the spine down to the first bus. */
+export function headHeight(s: Section, first: boolean): number {
+  if (!first) return CONT_H + BUS;
+  const top = s.fedBy !== null ? FED_H : 4;
+  return top + (s.spine.length - 1) * LEVEL + (s.rows.length > 0 ? BUS : NODE_BOTTOM);
+}
+
+function sum(list: number[], from: number, to: number): number {
+  let t = 0;
+  for (let i = from; i < to; i++) t += list[i] ?? 0;
+  return t;
+}
+
+/** Pack the sections onto sheets of `area`, shelf by shelf; null when a row cannot fit a sheet. */
+function pack(sections: Section[], area: Box): Piece[][] | null {
+  const sheets: Piece[][] = [[]];
+  let shelfY = 0;
+  let shelfBottom = 0;
+  let cursorX = 0;
+  const newSheet = (): void => {
+    sheets.push([]);
+    shelfY = 0;
+    shelfBottom = 0;
+    cursorX = 0;
+  };
+  for (const s of sections) {
+    let from = 0;
+    let first = true;
+    const rowsLeft = (): number => s.rows.length - from;
+    while (first || rowsLeft() > 0) {
+      const head = headHeight(s, first);
+      const whole = head + sum(s.rowH, from, s.rows.length);
+      const sheet = sheets[sheets.length - 1] ?? [];
+      const place = (x: number, y: number, to: number, h: number): void => {
+        sheet.push({ section: s, first, from, to, x, y, w: s.w, h });
+        cursorX = x + s.w + PIECE_GAP;
+        shelfBottom = Math.max(shelfBottom, y + h);
+        from = to;
+        first = false;
+      };
+      // Beside the pieces already on this shelf.
+      if (sheet.length > 0 && cursorX + s.w <= area.w && shelfY + whole <= area.h) {
+        place(cursorX, shelfY, s.rows.length, whole);
+        continue;
+      }
+      // On a new shelf below, whole or as many rows as fit.
+      const y = sheet.length === 0 ? 0 : shelfBottom + PIECE_GAP;
+      if (y + whole <= area.h) {
+        shelfY = y;
+        place(0, y, s.rows.length, whole);
+        continue;
+      }
+      let fit = from;
+      while (fit < s.rows.length && y + head + sum(s.rowH, from, fit + 1) <= area.h) fit++;
+      if (fit > from) {
+        shelfY = y;
+        place(0, y, fit, head + sum(s.rowH, from, fit));
+        newSheet();
+        continue;
+      }
+      if (sheet.length === 0) return null; // not even one row fits an empty sheet
+      newSheet();
+    }
+  }
+  return sheets.filter((sh) => sh.length > 0);
+}
+
+/** The section plan for `area`, or null when the drawing cannot be split this way. */
+export function planSections(job: Job, area: Box): SectionPlan | null {
+  for (const inline of [true, false]) {
+    const sections = buildSections(job, area, inline);
+    if (sections === null) continue;
+    const sheets = pack(sections, area);
+    if (sheets === null) continue;
+    const sheetOf = new Map<string, number>();
+    sheets.forEach((pieces, i) => pieces.forEach((p) => {
+      if (p.first) for (const s of p.section.spine) sheetOf.set(s.id, i);
+      for (const row of p.section.rows.slice(p.from, p.to)) {
+        for (const c of row) for (const n of c.nodes) if (!n.stub) sheetOf.set(n.id, i);
+      }
+    }));
+    // Centre each sheet's content in the area.
+    for (const pieces of sheets) {
+      const w = Math.max(...pieces.map((p) => p.x + p.w));
+      const h = Math.max(...pieces.map((p) => p.y + p.h));
+      const dx = area.x + Math.max(0, (area.w - w) / 2);
+      const dy = area.y + Math.max(0, (area.h - h) / 2);
+      for (const p of pieces) {
+        p.x += dx;
+        p.y += dy;
+      }
+    }
+    return { sheets, sheetOf };
+  }
+  return null;
+}
