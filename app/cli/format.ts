@@ -60,13 +60,13 @@ export function cableMark(cable: Cable): string {
 export const STATUS_WORD: Record<Status, string> = {
   pass: 'pass',
   fail: 'FAIL',
-  rcd: 'relies on RCD',
+  rcd: 'RCD-reliant',
   unchecked: 'unchecked',
 };
 
-/** The summary line: `12 pass, 1 fail, 1 relies on RCD, 2 unchecked`. */
+/** The summary line: `12 pass, 1 fail, 1 RCD-reliant, 2 unchecked`. */
 export function summaryLine(summary: Record<Status, number>): string {
-  return `${summary.pass} pass, ${summary.fail} fail, ${summary.rcd} relies on RCD, ${summary.unchecked} unchecked`;
+  return `${summary.pass} pass, ${summary.fail} fail, ${summary.rcd} RCD-reliant, ${summary.unchecked} unchecked`;
 }
 
 /** Cut free text to a column width, marking the cut. */

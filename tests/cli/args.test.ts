@@ -59,6 +59,6 @@ describe('display formatting', () => {
     expect(seconds(0.4)).toBe('0.4');
     expect(seconds(5)).toBe('5');
     expect(percent(0.46958)).toBe('47');
-    expect(summaryLine({ pass: 12, fail: 1, rcd: 1, unchecked: 2 })).toBe('12 pass, 1 fail, 1 relies on RCD, 2 unchecked');
+    expect(summaryLine({ pass: 12, fail: 1, rcd: 1, unchecked: 2 })).toBe('12 pass, 1 fail, 1 RCD-reliant, 2 unchecked');
   });
 });

@@ -25,7 +25,7 @@ describe('check on a passing job', () => {
     expect(out).toMatch(/^C1 .*Kitchen power.*final.*MSB→P1.*C20.*2\.5\/2\.5 Cu.*32\.0.*0\.576.*0\.0929.*1\.227.*150.*0\.4.*47.*68\.1.*pass$/m);
     expect(out).toMatch(/^M1 .*mains.*S1→MSB.*none.*16\/6 Cu.*unchecked$/m);
     expect(out).toContain('Worst fault path: S1 → M1 → MSB → C1 → P1 (ratio 47 %)');
-    expect(out).toContain('1 pass, 0 fail, 0 relies on RCD, 1 unchecked');
+    expect(out).toContain('1 pass, 0 fail, 0 RCD-reliant, 1 unchecked');
     expect(out).toContain(CAUTION);
   });
 
@@ -63,8 +63,8 @@ describe('exit status follows the findings', () => {
   it('exits 1 when a failing circuit only relies on its RCD, and says so in words', () => {
     const run = cli('check', fixture('rcd.lwj'));
     expect(run.status).toBe(1);
-    expect(run.stdout).toMatch(/^C1 .*C20 \+RCD.*relies on RCD$/m);
-    expect(run.stdout).toContain('0 pass, 0 fail, 1 relies on RCD, 1 unchecked');
+    expect(run.stdout).toMatch(/^C1 .*C20 \+RCD.*RCD-reliant$/m);
+    expect(run.stdout).toContain('0 pass, 0 fail, 1 RCD-reliant, 1 unchecked');
   });
 
   it('reports loading warnings on stderr without changing the exit status', () => {
