@@ -15,7 +15,7 @@ export type { Breakdown, Segment } from './analysis/breakdown.js';
 export { loopBreakdown } from './analysis/breakdown.js';
 export type { ResolvedRules, RuleValue } from './analysis/basis.js';
 export { resolveRules } from './analysis/basis.js';
-export { linkRole } from './analysis/network.js';
+export { linkRole, faultPath } from './analysis/network.js';
 export { deviceMark } from './analysis/devices.js';
 export { CAUTION } from './caution.js';
 export type { ReportOptions, Sheet } from './report/index.js';

@@ -93,3 +93,27 @@ export function linkRole(job: Job, linkId: string): LinkRole {
   if (!link) throw new Error(`no link ${linkId} in this job`);
   return net.role(link);
 }
+
+/**
+ * The fault path of a link: node and link ids alternately, from the top of its tree down to its
+ * far end, and whether that top is a supply (false for a link no supply reaches, whose path then
+ * starts at the highest node above it). Null when there is no such link.
+ */
+export function faultPath(job: Job, linkId: string): { ids: string[]; reachesSupply: boolean } | null {
+  const net = new Network(job);
+  const link = net.linkById.get(linkId);
+  if (!link) return null;
+  const ids: string[] = [link.to, link.id];
+  const seen = new Set<string>([link.to]);
+  let at = link.from;
+  while (!seen.has(at)) {
+    seen.add(at);
+    ids.push(at);
+    const up = net.feeder.get(at);
+    if (!up) break;
+    ids.push(up.id);
+    at = up.from;
+  }
+  ids.reverse();
+  return { ids, reachesSupply: net.nodeById.get(ids[0]!)?.kind === 'supply' };
+}
