@@ -4,7 +4,7 @@
 import type { JobDetails } from '../model/types.js';
 import { GREY, INK, stroke, text } from './draw.js';
 import { frameBox, TITLE_BLOCK_H, type Box, type Paper } from './paper.js';
-import { truncate, wrap } from './text.js';
+import { textWidth, truncate, wrap } from './text.js';
 import type { Item } from './types.js';
 
 /** The caution in short, on every sheet; the assumptions sheet prints it in full. */
@@ -54,8 +54,12 @@ export function titleBlock(paper: Paper, info: TitleInfo): Item[] {
   const titleBox = { x: f.x, y: top, w: half, h: r1 };
   items.push({ kind: 'rect', x: titleBox.x, y: titleBox.y, w: titleBox.w, h: titleBox.h, stroke: stroke(0.25) });
   items.push(text(f.x + 1.5, top + 2.6, 'Title', CAPTION, 'regular', 'start', GREY));
-  items.push(text(f.x + 1.5, top + 7, truncate(d.title === '' ? 'Untitled job' : d.title, 'bold', 4, half - 3), 4, 'bold'));
-  items.push(text(f.x + 1.5, top + 11, truncate(info.sheetTitle, 'regular', 2.6, half - 3), 2.6));
+  // The title whole: smaller where it is long, on two lines where even that does not fit.
+  const title = d.title === '' ? 'Untitled job' : d.title;
+  const size = [4, 3.4, 2.8].find((z) => textWidth(title, 'bold', z) <= half - 3);
+  if (size !== undefined) items.push(text(f.x + 1.5, top + 7, title, size, 'bold'));
+  else wrap(title, 'bold', 2.6, half - 3, 2).forEach((l, i) => items.push(text(f.x + 1.5, top + 5.4 + i * 2.9, l, 2.6, 'bold')));
+  items.push(text(f.x + 1.5, top + 11.4, truncate(info.sheetTitle, 'regular', 2.4, half - 3), 2.4));
   items.push(...cell({ x: f.x + half, y: top, w: quarter, h: r1 }, 'Site', d.site, { lines: 2 }));
   items.push(...cell({ x: f.x + half + quarter, y: top, w: f.w - half - quarter, h: r1 }, 'Client', d.client, { lines: 2 }));
 
