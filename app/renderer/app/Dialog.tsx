@@ -4,8 +4,17 @@ import { useEffect, useRef, type ReactNode } from 'react';
 export function Dialog({ title, onClose, children, wide }: { title: string; onClose(): void; children: ReactNode; wide?: boolean }) {
   const box = useRef<HTMLDivElement>(null);
   useEffect(() => {
-    const first = box.current?.querySelector<HTMLElement>('input, button, [tabindex]');
+    // Focus the first field of the body (Find's search box), else its first control, else Close.
+    const body = box.current?.querySelector('.lw-dialog-body');
+    const first = body?.querySelector<HTMLElement>('input, textarea, select')
+      ?? body?.querySelector<HTMLElement>('button, [tabindex]')
+      ?? box.current?.querySelector<HTMLElement>('button');
+    const before = document.activeElement instanceof HTMLElement ? document.activeElement : null;
     first?.focus();
+    // Focus goes back where it was (the sheet or a schedule row) when the dialog closes.
+    return () => {
+      if (before && before.isConnected) before.focus();
+    };
   }, []);
   return (
     <div className="lw-overlay" onMouseDown={(e) => e.target === e.currentTarget && onClose()}>

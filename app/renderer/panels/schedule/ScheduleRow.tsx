@@ -66,7 +66,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       <td className="lwp-cell-id" data-cell="id" title={`${id} (rename it in the details panel)`}>{id}</td>
       <td className="lwp-cell-name">
         <TextField compact attr="data-cell" field="name" label={`Name of ${id}`} value={link.name} title={link.name}
-          onCommit={set('name')} />
+          placeholder="no name" onCommit={set('name')} />
       </td>
       <td className="lwp-cell-node" title={fromName ? `${link.from} — ${fromName}` : link.from}>{link.from}</td>
       <td className="lwp-cell-node" title={toName ? `${link.to} — ${toName}` : link.to}>{link.to}</td>
@@ -110,7 +110,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       <td className="lwp-num">{ohmsValue(r?.limit)}</td>
       <td className="lwp-num">{num(r?.tripCurrent, 1)}</td>
       <td className="lwp-num">{num(r?.requiredTime, 2)}</td>
-      <td className="lwp-num">{num(r?.maxLength, 1)}</td>
+      <td className="lwp-num">{r?.maxLength != null && Number.isFinite(r.maxLength) ? r.maxLength.toFixed(1) : "—"}</td>
       <td className="lwp-num lwp-cell-ratio lwp-sticky-ratio">{percentValue(r?.ratio)}</td>
       <td className="lwp-sticky-status">{r ? <StatusBadge status={r.status} /> : '—'}</td>
     </tr>

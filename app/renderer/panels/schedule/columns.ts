@@ -53,7 +53,7 @@ export const COLUMNS: readonly Column[] = [
   { key: 'limit', label: 'Limit', unit: 'Ω', title: 'The loop impedance limit for this circuit (Ω)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.limit ?? null },
   { key: 'ia', label: 'Ia', unit: 'A', title: 'Current Ia that disconnects the device in the required time (A)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.tripCurrent ?? null },
   { key: 'treq', label: 't req', unit: 's', title: 'Required disconnection time (s)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.requiredTime ?? null },
-  { key: 'maxLength', label: 'Max length', unit: 'm', title: 'Maximum length of this link for its loop to stay within the limit (m)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
+  { key: 'maxLength', label: 'Max len.', unit: 'm', title: 'Maximum length of this link for its loop to stay within the limit (m)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
   { key: 'ratio', label: 'Ratio', unit: '%', title: 'Loop impedance as a share of its limit, % (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
   { key: 'status', label: 'Status', title: 'fail, relies on RCD, pass, unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.status] : null) },
 ];
