@@ -28,9 +28,17 @@ const jobs: Array<[string, () => Job]> = [
 describe.each(jobs)('layoutReport: %s', (_name, make) => {
   const job = make();
   const results = analyse(job);
+  // Laid out once per paper and shared by the tests below.
+  const laid = new Map<string, Sheet[]>();
+  const sheetsFor = (options: ReportOptions = {}): Sheet[] => {
+    const key = JSON.stringify(options);
+    const hit = laid.get(key) ?? layoutReport(job, results, options);
+    laid.set(key, hit);
+    return hit;
+  };
 
   it.each(PAPERS)('keeps every text at 2 mm or more, inside the frame, without overlaps (%o)', (options) => {
-    const sheets = layoutReport(job, results, options);
+    const sheets = sheetsFor(options);
     for (const sheet of sheets) {
       for (const t of texts(sheet)) {
         expect(t.size).toBeGreaterThanOrEqual(MIN_TEXT_MM);
@@ -45,7 +53,7 @@ describe.each(jobs)('layoutReport: %s', (_name, make) => {
   });
 
   it('puts every link id, its status word and "sheet n of m" on the sheets', () => {
-    const sheets = layoutReport(job, results);
+    const sheets = sheetsFor();
     const diagram = allText(sheets.filter((s) => s.kind === 'diagram'));
     const schedule = allText(sheets.filter((s) => s.kind === 'schedule'));
     for (const link of job.links) {
@@ -62,12 +70,12 @@ describe.each(jobs)('layoutReport: %s', (_name, make) => {
   });
 
   it('marks the worst fault path', () => {
-    const sheets = layoutReport(job, results);
+    const sheets = sheetsFor();
     if (results.worst !== null) expect(allText(sheets)).toContain('worst fault path');
   });
 
   it('is deterministic, and its SVG names the font', () => {
-    const a = layoutReport(job, results).map(sheetToSvg);
+    const a = sheetsFor().map(sheetToSvg);
     const b = layoutReport(job, analyse(job)).map(sheetToSvg);
     expect(a).toEqual(b);
     expect(a[0]).toContain("font-family=\"'DejaVu Sans'");
