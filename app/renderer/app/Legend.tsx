@@ -1,5 +1,6 @@
 // The legend: what the status symbols and the line styles on the sheet mean. The line samples
-// use the sheet's own classes (lw-link, lw-status--*, is-traced), so they cannot drift from it.
+// are drawn by the same CSS rules as the sheet's links (styles.css, .lw-sample--*), so they
+// cannot drift from it; they carry their own classes so that nothing mistakes them for links.
 import type { Status } from '../../../engine/index.js';
 import { STATUS_SYMBOL, STATUS_WORD } from '../sheet/labels.js';
 
@@ -12,23 +13,23 @@ const STATUS_MEANING: Record<Status, string> = {
 
 const STATUSES: Status[] = ['pass', 'fail', 'rcd', 'unchecked'];
 
-function Line({ className }: { className: string }) {
+function Line({ kind }: { kind: string }) {
   return (
     <svg className="lw-legend-line" viewBox="0 0 40 12" aria-hidden="true">
-      <g className={className}>
-        <path className="react-flow__edge-path" d="M2 6 H38" fill="none" />
+      <g className={`lw-sample lw-sample--${kind}`}>
+        <path d="M2 6 H38" />
       </g>
     </svg>
   );
 }
 
-const LINES: Array<{ className: string; text: string; short: string; hook: string }> = [
-  { className: 'lw-link lw-status--pass', text: 'solid: a checked link that passes', short: 'pass', hook: 'pass' },
-  { className: 'lw-link lw-status--fail', text: 'solid red: a link that fails', short: 'fail', hook: 'fail' },
-  { className: 'lw-link lw-status--rcd', text: 'solid amber: a link relying on its RCD', short: 'RCD-reliant', hook: 'rcd' },
-  { className: 'lw-link lw-status--unchecked', text: 'dotted: unchecked, e.g. unprotected (no device)', short: 'dotted: unchecked / unprotected', hook: 'unchecked' },
-  { className: 'lw-link is-traced', text: 'thick dashed: the traced fault path (worst or selected loop)', short: 'dashed: traced fault path', hook: 'traced' },
-  { className: 'lw-link is-selected', text: 'thick blue: selected', short: 'selected', hook: 'selected' },
+const LINES: Array<{ text: string; short: string; hook: string }> = [
+  { text: 'solid: a checked link that passes', short: 'pass', hook: 'pass' },
+  { text: 'solid red: a link that fails', short: 'fail', hook: 'fail' },
+  { text: 'solid amber: a link relying on its RCD', short: 'RCD-reliant', hook: 'rcd' },
+  { text: 'dotted: unchecked, e.g. unprotected (no device)', short: 'dotted: unchecked / unprotected', hook: 'unchecked' },
+  { text: 'thick dashed: the traced fault path (worst or selected loop)', short: 'dashed: traced fault path', hook: 'traced' },
+  { text: 'thick blue: selected', short: 'selected', hook: 'selected' },
 ];
 
 export function Legend({ compact }: { compact?: boolean }) {
@@ -45,7 +46,7 @@ export function Legend({ compact }: { compact?: boolean }) {
       <ul className="lw-legend-lines" aria-label="Line styles">
         {LINES.map((l) => (
           <li key={l.hook} data-legend-line={l.hook} title={l.text}>
-            <Line className={l.className} />
+            <Line kind={l.hook} />
             <span>{compact ? l.short : l.text}</span>
           </li>
         ))}

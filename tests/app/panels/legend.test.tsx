@@ -18,9 +18,9 @@ describe('legend', () => {
     expect(lines).toEqual(expect.arrayContaining(['traced', 'unchecked', 'fail', 'rcd']));
     expect(legend.querySelector('[data-legend-line="traced"]')!.textContent).toMatch(/dashed/);
     expect(legend.querySelector('[data-legend-line="unchecked"]')!.textContent).toMatch(/unprotected/);
-    // The samples are drawn with the sheet's own classes, so they look like the sheet.
-    expect(legend.querySelector('[data-legend-line="traced"] g')!.getAttribute('class')).toBe('lw-link is-traced');
-    expect(legend.querySelector('[data-legend-line="fail"] g')!.getAttribute('class')).toBe('lw-link lw-status--fail');
+    // The samples are drawn by the sheet's rules (styles.css) but are not links: no sheet class or hook.
+    expect(legend.querySelector('[data-legend-line="traced"] g')!.getAttribute('class')).toBe('lw-sample lw-sample--traced');
+    expect(legend.querySelector('.lw-link, .is-traced, .is-selected, [data-link-id]')).toBeNull();
   });
 
   it('is in full in About, one click away, with the whole caution', () => {
