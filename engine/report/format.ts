@@ -73,7 +73,7 @@ export const ROLE_LONG: Record<LinkRole, string> = {
 export const STATUS_WORD: Record<Status, string> = {
   pass: 'PASS',
   fail: 'FAIL',
-  rcd: 'RCD',
+  rcd: 'RCD-RELIANT',
   unchecked: 'UNCHECKED',
 };
 

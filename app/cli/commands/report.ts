@@ -10,6 +10,7 @@ import type { OptionSpec } from '../args.js';
 import { EXIT, type Command } from '../command.js';
 import { loadJobFile } from '../io.js';
 import { exitFor } from './check.js';
+import { summaryLine } from '../format.js';
 
 const options: OptionSpec[] = [
   { name: 'output', short: 'o', value: 'OUT.pdf', summary: 'the PDF file to write (required)' },
@@ -119,7 +120,7 @@ export const report: Command = {
     }
     out(`wrote ${wrote.join('; ')}\n`);
     const s = results.summary;
-    out(`${s.pass} pass, ${s.fail} fail, ${s.rcd} RCD, ${s.unchecked} unchecked\n`);
+    out(`${summaryLine(s)}\n`);
     return exitFor(results);
   },
 };
