@@ -30,9 +30,19 @@ export function parseJob(text: string): LoadResult {
     value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     const detail = e instanceof Error ? e.message : String(e);
-    return fileProblem(`the file is not valid JSON (${detail})`);
+    return fileProblem(`the file is not valid JSON (${detail}${lineAndColumn(text, detail)})`);
   }
   return loadJob(value);
+}
+
+/** ", line 3 column 7" for a JSON error message that gives a character position. */
+function lineAndColumn(text: string, message: string): string {
+  const m = /position (\d+)/.exec(message);
+  if (!m || /line \d+/.test(message)) return '';
+  const before = text.slice(0, Number(m[1]));
+  const line = before.split('\n').length;
+  const column = before.length - before.lastIndexOf('\n');
+  return `, line ${line} column ${column}`;
 }
 
 /** Read a job from an already-parsed file object (or anything else). */
