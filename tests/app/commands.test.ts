@@ -108,4 +108,27 @@ describe('copy and paste with the subtree', () => {
     runCommand('edit.paste');
     expect(s().job.nodes.find((n) => n.id === 'MSB2')?.at).toEqual({ x: 80, y: 240 });
   });
+
+  it('says what was copied, then what was pasted', () => {
+    s().select({ nodes: ['MSB'], links: [] });
+    runCommand('edit.copy');
+    expect(s().message?.text).toBe('Copied 3 nodes and 2 links');
+    runCommand('edit.paste');
+    expect(s().message).toEqual({ kind: 'info', text: 'Pasted 5 elements (3 nodes, 2 links)' });
+  });
+});
+
+describe('tracing a selected loop', () => {
+  it('highlights the path from the supply, and refuses a link no supply reaches', () => {
+    s().select({ nodes: [], links: ['C2'] });
+    runCommand('view.traceSelected');
+    expect(s().highlightPath).toEqual(['S1', 'M1', 'MSB', 'C2', 'P2']);
+    expect(s().breakdownLink).toBe('C2');
+    s().setHighlight(null, null);
+    s().apply({ op: 'remove', ids: ['M1'] });
+    s().select({ nodes: [], links: ['C1'] });
+    runCommand('view.traceSelected');
+    expect(s().highlightPath).toBeNull();
+    expect(s().message).toEqual({ kind: 'error', text: 'C1 is not fed from a supply, so it has no fault loop to trace' });
+  });
 });

@@ -1,7 +1,7 @@
 // The one command registry. The toolbar, the sheet's context menu, the keyboard and (desktop)
 // the native menu all look commands up here by id.
-import type { NodeKind } from '../../../engine/index.js';
-import { newPart, pathTo } from '../sheet/parts.js';
+import { faultPath, type NodeKind } from '../../../engine/index.js';
+import { newPart } from '../sheet/parts.js';
 import { autoArrange } from '../sheet/arrange.js';
 import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
 import type { Command, CommandContext } from './types.js';
@@ -30,12 +30,16 @@ function addPart(kind: NodeKind): Command['run'] {
   };
 }
 
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
+
 function copySelection(ctx: CommandContext): number {
   const s = ctx.store.getState();
   clip = collectSubtree(s.job, s.selection);
   pasteCount = 0;
   const n = clip.nodes.length + clip.links.length;
-  s.setMessage({ kind: 'info', text: `Copied ${clip.nodes.length} node(s) and ${clip.links.length} link(s)` });
+  s.setMessage({ kind: 'info', text: `Copied ${plural(clip.nodes.length, 'node')} and ${plural(clip.links.length, 'link')}` });
   return n;
 }
 
@@ -79,7 +83,11 @@ export const COMMANDS: Command[] = [
       const s = ctx.store.getState();
       const { edit, ids } = pasteEdit(s.job, clip, { x: 40 * pasteCount, y: 40 * pasteCount });
       const outcome = s.apply(edit, 'paste');
-      if (outcome.ok) ctx.store.getState().select(ids);
+      if (!outcome.ok) return;
+      const after = ctx.store.getState();
+      after.select(ids);
+      const n = ids.nodes.length + ids.links.length;
+      after.setMessage({ kind: 'info', text: `Pasted ${n} element${n === 1 ? '' : 's'} (${plural(ids.nodes.length, 'node')}, ${plural(ids.links.length, 'link')})` });
     },
   },
   {
@@ -146,7 +154,8 @@ export const COMMANDS: Command[] = [
       const s = ctx.store.getState();
       const id = s.selection.links[0];
       if (!id) return;
-      const path = pathTo(s.job, id);
+      const found = faultPath(s.job, id);
+      const path = found?.reachesSupply ? found.ids : null;
       if (!path) {
         s.setMessage({ kind: 'error', text: `${id} is not fed from a supply, so it has no fault loop to trace` });
         return;

@@ -1,7 +1,7 @@
 // What the panels ask of the store: field edits as store edits, the fault path of a link,
 // and showing a loop breakdown.
 
-import type { Job } from '../../../engine/index.js';
+import { faultPath } from '../../../engine/index.js';
 import { useEditor } from '../store/index.js';
 import type { Outcome } from './fields/fields.js';
 import { patchFor } from './patch.js';
@@ -35,32 +35,11 @@ function keepSelected(to: string, kind: 'nodes' | 'links') {
   s.select(kind === 'nodes' ? { nodes: sel } : { links: sel });
 }
 
-/**
- * Node and link ids alternately from the supply to the far end of a link
- * (the shape of `worst.path` in the results document). Stops safely on a broken chain.
- */
-export function pathToLink(job: Job, linkId: string): string[] {
-  const feeder = new Map(job.links.map((l) => [l.to, l]));
-  const link = job.links.find((l) => l.id === linkId);
-  if (!link) return [];
-  const path: string[] = [link.to, link.id];
-  let at = link.from;
-  const seen = new Set<string>([link.to]);
-  while (!seen.has(at)) {
-    seen.add(at);
-    path.push(at);
-    const up = feeder.get(at);
-    if (!up) break;
-    path.push(up.id);
-    at = up.from;
-  }
-  return path.reverse();
-}
-
 /** Highlights the fault path of a link and opens its loop breakdown. */
 export function showBreakdown(linkId: string): void {
   const s = useEditor.getState();
-  s.setHighlight(pathToLink(s.job, linkId), linkId);
+  // The whole drawn path, even when no supply reaches it (the breakdown then says so).
+  s.setHighlight(faultPath(s.job, linkId)?.ids ?? [], linkId);
 }
 
 export function closeBreakdown(): void {

@@ -11,5 +11,5 @@ export { JobPanel } from './job/JobPanel.js';
 export { SchedulePanel } from './schedule/SchedulePanel.js';
 export { BreakdownPanel } from './breakdown/BreakdownPanel.js';
 export { useBreakdownFollowsSelection, useBreakdownView, followTarget } from './breakdown/follow.js';
-export { showBreakdown, closeBreakdown, pathToLink } from './actions.js';
+export { showBreakdown, closeBreakdown } from './actions.js';
 export { STATUS_LOOK } from './format.js';

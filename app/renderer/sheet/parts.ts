@@ -30,24 +30,3 @@ export function newPart(job: Job, kind: NodeKind, centre: { x: number; y: number
   if (kind === 'board') return { id, kind, name: `Board ${id}`, at };
   return { id, kind, name: `Point ${id}`, use: 'socket-outlets', at };
 }
-
-/** Node and link ids from the supply down to the far end of a link (null if no supply feeds it). */
-export function pathTo(job: Job, linkId: string): string[] | null {
-  const feeder = new Map(job.links.map((l) => [l.to, l]));
-  const link = job.links.find((l) => l.id === linkId);
-  if (!link) return null;
-  const path = [link.to, link.id];
-  let at = link.from;
-  const seen = new Set<string>();
-  for (;;) {
-    if (seen.has(at)) return null;
-    seen.add(at);
-    path.push(at);
-    const up = feeder.get(at);
-    if (!up) break;
-    path.push(up.id);
-    at = up.from;
-  }
-  const top = job.nodes.find((n) => n.id === at);
-  return top?.kind === 'supply' ? path.reverse() : null;
-}
