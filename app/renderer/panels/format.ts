@@ -60,15 +60,5 @@ export const STATUS_LOOK: Record<Status, StatusLook> = {
   unchecked: { symbol: STATUS_SYMBOL.unchecked, word: STATUS_WORD.unchecked, className: 'lwp-status-unchecked' },
 };
 
-/** Short role words for the schedule's narrow column. */
-export const ROLE_SHORT: Record<string, string> = {
-  'consumer-mains': 'mains',
-  submain: 'submain',
-  'final-subcircuit': 'final',
-};
-
-export const ROLE_WORD: Record<string, string> = {
-  'consumer-mains': 'consumer mains',
-  submain: 'submain',
-  'final-subcircuit': 'final subcircuit',
-};
+// Role words: the same as the printout and the CLI use (short for narrow columns).
+export { ROLE_SHORT, ROLE_LONG } from '../../../engine/report/index.js';

@@ -4,7 +4,7 @@ import { linkRole, resolveRules, STANDARD_SIZES, type Link, type Material } from
 import { useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { NumberField, Readout, SelectField, TextField } from '../fields/fields.js';
-import { ROLE_WORD, num } from '../format.js';
+import { ROLE_LONG, num } from '../format.js';
 import { CircuitResults } from './CircuitResults.js';
 import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
 
@@ -45,7 +45,7 @@ export function LinkDetails({ link }: { link: Link }) {
   const to = job.nodes.find((n) => n.id === link.to);
   let role = '';
   try {
-    role = ROLE_WORD[linkRole(job, id)] ?? '';
+    role = ROLE_LONG[linkRole(job, id)] ?? '';
   } catch {
     role = '';
   }

@@ -7,7 +7,7 @@ import { selectLink, selectNode, selectResult, useEditor } from '../../store/ind
 import { editLink } from '../actions.js';
 import { StatusBadge } from '../details/CircuitResults.js';
 import { NumberField, TextField } from '../fields/fields.js';
-import { ROLE_SHORT, ROLE_WORD, num, ohms, ohmsValue, percentValue } from '../format.js';
+import { ROLE_SHORT, ROLE_LONG, num, ohms, ohmsValue, percentValue } from '../format.js';
 
 export const ROW_HEIGHT = 34;
 
@@ -70,7 +70,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       </td>
       <td className="lwp-cell-node" title={fromName ? `${link.from} — ${fromName}` : link.from}>{link.from}</td>
       <td className="lwp-cell-node" title={toName ? `${link.to} — ${toName}` : link.to}>{link.to}</td>
-      <td className="lwp-cell-role" title={r ? ROLE_WORD[r.role] : undefined}>{r ? ROLE_SHORT[r.role] : '—'}</td>
+      <td className="lwp-cell-role" title={r ? ROLE_LONG[r.role] : undefined}>{r ? ROLE_SHORT[r.role] : '—'}</td>
       <td>
         <span className="lwp-cell-cable">
           <NumberField compact attr="data-cell" field="cable.active" label={`Active size of ${id}`} unit="mm²" above={0}
