@@ -107,6 +107,35 @@ describe('store: apply, undo, redo', () => {
     expect(s().apply({ op: 'update-node', id: 'MB', patch: { id: 'C1' } }).ok).toBe(false);
   });
 
+  it('a renamed link keeps its breakdown, traced path and selection, through undo and redo', () => {
+    s().select({ nodes: [], links: ['C1'] });
+    s().setHighlight(['S1', 'M1', 'MSB', 'C1', 'P1'], 'C1');
+    expect(s().apply({ op: 'update-link', id: 'C1', patch: { id: 'K7' } }, 'rename C1').ok).toBe(true);
+    expect(s().breakdownLink).toBe('K7');
+    expect(s().highlightPath).toEqual(['S1', 'M1', 'MSB', 'K7', 'P1']);
+    expect(s().selection.links).toEqual(['K7']);
+    s().undo();
+    expect(s().breakdownLink).toBe('C1');
+    expect(s().highlightPath).toEqual(['S1', 'M1', 'MSB', 'C1', 'P1']);
+    expect(s().selection.links).toEqual(['C1']);
+    s().redo();
+    expect(s().breakdownLink).toBe('K7');
+  });
+
+  it('a renamed node on the traced path is followed; a removed link still closes the breakdown', () => {
+    s().setHighlight(['S1', 'M1', 'MSB', 'C2', 'P2'], 'C2');
+    expect(s().apply({ op: 'update-node', id: 'MSB', patch: { id: 'MB' } }).ok).toBe(true);
+    expect(s().highlightPath).toEqual(['S1', 'M1', 'MB', 'C2', 'P2']);
+    expect(s().breakdownLink).toBe('C2');
+    // Removing one link and adding another keeps neither the breakdown nor the path.
+    expect(s().apply({ op: 'batch', edits: [
+      { op: 'remove', ids: ['C2'] },
+      { op: 'add-link', link: { id: 'C9', from: 'MB', to: 'P2', cable: { length: 5, material: 'Cu', active: 2.5, earth: 2.5 } } },
+    ] }).ok).toBe(true);
+    expect(s().breakdownLink).toBeNull();
+    expect(s().highlightPath).toBeNull();
+  });
+
   it('live moves during a drag make one undo step when committed, without re-analysing', () => {
     const before = s().job;
     const results = s().results;

@@ -4,6 +4,7 @@
 import { create } from 'zustand';
 import { newJob, type CircuitResult, type Job, type Results } from '../../../engine/index.js';
 import { derive } from './derive.js';
+import { idFollower } from './renames.js';
 import { firstError, describe } from './derive.js';
 import { applyEdit, EditError, onlyMoves, touchedIds, type ApplyOutcome, type Edit } from './edits.js';
 
@@ -61,11 +62,23 @@ let savedJob: Job | null = null;
 let gestureBase: Job | null = null;
 let focusSeq = 0;
 
-function existing(job: Job, sel: { nodes: string[]; links: string[] }) {
-  const nodes = new Set(job.nodes.map((n) => n.id));
-  const links = new Set(job.links.map((l) => l.id));
-  const kept = { nodes: sel.nodes.filter((id) => nodes.has(id)), links: sel.links.filter((id) => links.has(id)) };
-  return kept.nodes.length === sel.nodes.length && kept.links.length === sel.links.length ? sel : kept;
+/** The selection with renamed ids followed and ids that are gone dropped (same object when unchanged). */
+function existing(follow: (id: string) => string | null, sel: { nodes: string[]; links: string[] }) {
+  const keep = (ids: string[]) => {
+    const out: string[] = [];
+    const seen = new Set<string>();
+    for (const id of ids) {
+      const now = follow(id);
+      if (now !== null && !seen.has(now)) {
+        seen.add(now);
+        out.push(now);
+      }
+    }
+    return out.length === ids.length && out.every((id, i) => id === ids[i]) ? ids : out;
+  };
+  const nodes = keep(sel.nodes);
+  const links = keep(sel.links);
+  return nodes === sel.nodes && links === sel.links ? sel : { nodes, links };
 }
 
 function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; reason: string; field?: string } {
@@ -91,14 +104,21 @@ export const useEditor = create<EditorState>()((set, get) => {
   function become(job: Job, reanalyse: boolean, extra: Partial<EditorState> = {}) {
     const s = get();
     const derived = reanalyse ? derive(job, s.resultById) : null;
-    const known = (id: string) => job.nodes.some((n) => n.id === id) || job.links.some((l) => l.id === id);
-    const highlightPath = s.highlightPath && s.highlightPath.every(known) ? s.highlightPath : null;
-    const breakdownLink = s.breakdownLink && job.links.some((l) => l.id === s.breakdownLink) ? s.breakdownLink : null;
+    // A renamed element keeps its place in the selection, the traced path and the breakdown.
+    const follow = idFollower(s.job, job);
+    let highlightPath = s.highlightPath;
+    if (highlightPath) {
+      const now = highlightPath.map(follow);
+      if (now.some((id) => id === null)) highlightPath = null;
+      else if (now.some((id, i) => id !== highlightPath![i])) highlightPath = now as string[];
+    }
+    const followed = s.breakdownLink ? follow(s.breakdownLink) : null;
+    const breakdownLink = followed !== null && job.links.some((l) => l.id === followed) ? followed : null;
     set({
       job,
       ...(derived ? { results: derived.results, resultById: derived.resultById } : {}),
       ...(derived?.error ? { message: { kind: 'error' as const, text: derived.error } } : {}),
-      selection: existing(job, s.selection),
+      selection: existing(follow, s.selection),
       highlightPath,
       breakdownLink,
       dirty: job !== savedJob,
@@ -186,7 +206,8 @@ export const useEditor = create<EditorState>()((set, get) => {
 
     select(sel) {
       const s = get().selection;
-      set({ selection: existing(get().job, { nodes: sel.nodes ?? s.nodes, links: sel.links ?? s.links }) });
+      const job = get().job;
+      set({ selection: existing(idFollower(job, job), { nodes: sel.nodes ?? s.nodes, links: sel.links ?? s.links }) });
     },
 
     markSaved(file) {
