@@ -1,5 +1,6 @@
 // The sheet's context menu: registry commands marked for it, at the cursor.
 import { useEffect } from 'react';
+import { useShallow } from 'zustand/react/shallow';
 import { useEditor } from '../store/editor.js';
 import { COMMANDS } from '../commands/registry.js';
 import { runCommand } from '../commands/context.js';
@@ -8,10 +9,12 @@ import { useUi } from './ui.js';
 
 const desktop = typeof window !== 'undefined' && window.loopwright !== undefined;
 const items = COMMANDS.filter((c) => c.contextMenu);
+const NONE: boolean[] = [];
 
 export function ContextMenu() {
   const at = useUi((s) => s.contextMenu);
-  const state = useEditor();
+  // Whether each item is enabled, and only while the menu is open.
+  const enabled = useEditor(useShallow((s) => (at ? items.map((c) => c.enabled(s, { desktop })) : NONE)));
   useEffect(() => {
     if (!at) return;
     const close = (e: Event) => {
@@ -28,14 +31,14 @@ export function ContextMenu() {
   if (!at) return null;
   return (
     <div className="lw-menu" role="menu" style={{ left: at.x, top: at.y }}>
-      {items.map((c) => (
+      {items.map((c, i) => (
         <button
           key={c.id}
           type="button"
           role="menuitem"
           data-command={c.id}
           className={c.separatorBefore ? 'lw-menu-sep' : undefined}
-          disabled={!c.enabled(state, { desktop })}
+          disabled={!enabled[i]}
           onClick={() => runCommand(c.id)}
         >
           <span>{c.label}</span>

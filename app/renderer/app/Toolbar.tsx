@@ -1,4 +1,5 @@
 // The toolbar: commands from the registry that carry a toolbar text, plus the file input.
+import { useShallow } from 'zustand/react/shallow';
 import { useEditor } from '../store/editor.js';
 import { COMMANDS } from '../commands/registry.js';
 import { runCommand } from '../commands/context.js';
@@ -9,8 +10,9 @@ const desktop = typeof window !== 'undefined' && window.loopwright !== undefined
 const items = COMMANDS.filter((c) => c.toolbar);
 
 export function Toolbar() {
-  // Re-render when anything an enabled() test reads changes.
-  const state = useEditor();
+  // Only whether each button is enabled is subscribed (a drag or an edit that leaves them all as
+  // they were does not re-render the toolbar).
+  const enabled = useEditor(useShallow((s) => items.map((c) => c.enabled(s, { desktop }))));
   const title = useEditor((s) => s.job.job.title);
   const fileName = useEditor((s) => s.fileName);
   const dirty = useEditor((s) => s.dirty);
@@ -21,13 +23,13 @@ export function Toolbar() {
         Loopwright
       </div>
       <div className="lw-toolbar-buttons">
-        {items.map((c) => (
+        {items.map((c, i) => (
           <button
             key={c.id}
             type="button"
             className={`lw-tool${c.separatorBefore ? ' lw-tool--sep' : ''}`}
             data-command={c.id}
-            disabled={!c.enabled(state, { desktop })}
+            disabled={!enabled[i]}
             title={`${c.label}${c.shortcut ? ` (${showShortcut(c.shortcut)})` : ''}`}
             onClick={() => runCommand(c.id)}
           >

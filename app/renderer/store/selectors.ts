@@ -30,6 +30,18 @@ function indexer<T extends { id: string }>(pick: (s: EditorState) => T[]) {
 const nodeIndex = indexer((s) => s.job.nodes);
 const linkIndex = indexer((s) => s.job.links);
 
+// The link feeding each node (the first one, as the engine's network takes it).
+let feederSource: Link[] | null = null;
+let feeders = new Map<string, Link>();
+function feederIndex(s: EditorState): Map<string, Link> {
+  if (s.job.links !== feederSource) {
+    feederSource = s.job.links;
+    feeders = new Map();
+    for (const l of s.job.links) if (!feeders.has(l.to)) feeders.set(l.to, l);
+  }
+  return feeders;
+}
+
 const nodeSelectors = new Map<string, Selector<JobNode | undefined>>();
 const linkSelectors = new Map<string, Selector<Link | undefined>>();
 const resultSelectors = new Map<string, Selector<CircuitResult | undefined>>();
@@ -44,6 +56,33 @@ export function selectLink(id: string): Selector<Link | undefined> {
 
 export function selectResult(id: string): Selector<CircuitResult | undefined> {
   return cached(resultSelectors, id, () => (s) => s.resultById[id]);
+}
+
+/**
+ * Everything one link's loop depends on: the job's rules and the records of the nodes and links
+ * on its path, from its far end up to the top of its tree. Use with useShallow: the array is new
+ * on every call, its items are the store's own records, so it compares equal until one of them
+ * changes (an edit or a move elsewhere in the job leaves it alone).
+ */
+export function selectLoopInputs(linkId: string): Selector<unknown[]> {
+  return (s) => {
+    const link = linkIndex(s).get(linkId);
+    if (!link) return [];
+    const nodes = nodeIndex(s);
+    const feeder = feederIndex(s);
+    const out: unknown[] = [s.job.rules, link, nodes.get(link.to)];
+    const seen = new Set<string>([link.to]);
+    let at = link.from;
+    while (!seen.has(at)) {
+      seen.add(at);
+      out.push(nodes.get(at));
+      const up = feeder.get(at);
+      if (!up) break;
+      out.push(up);
+      at = up.from;
+    }
+    return out;
+  };
 }
 
 // An id list that keeps its identity while the ids (and their order) stay the same.

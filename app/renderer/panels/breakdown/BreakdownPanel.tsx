@@ -4,7 +4,8 @@
 
 import { useMemo } from 'react';
 import { loopBreakdown, resolveRules, type Breakdown, type Job } from '../../../../engine/index.js';
-import { selectResult, useEditor } from '../../store/index.js';
+import { useShallow } from 'zustand/react/shallow';
+import { selectLink, selectLoopInputs, selectResult, useEditor } from '../../store/index.js';
 import { closeBreakdown } from '../actions.js';
 import { useBreakdownView } from './follow.js';
 import { StatusBadge } from '../details/CircuitResults.js';
@@ -37,13 +38,15 @@ function Against(props: { label: string; z: number | null; limit: number | null;
 }
 
 export function BreakdownView({ linkId }: { linkId: string }) {
-  const job = useEditor((s) => s.job);
+  // Recomputed only when a record on this link's path (or the rules) changes, not on every edit.
+  const inputs = useEditor(useShallow(selectLoopInputs(linkId)));
+  const rules = useEditor((s) => s.job.rules);
   const result = useEditor(selectResult(linkId));
-  const breakdown = useMemo(() => safeBreakdown(job, linkId), [job, linkId]);
+  const breakdown = useMemo(() => safeBreakdown(useEditor.getState().job, linkId), [inputs, linkId]);
   if (!breakdown) return <p className="lwp-empty">No loop breakdown for {linkId}: no supply reaches it.</p>;
   const { limit, total, segments, method } = breakdown;
   const known = method === 'known-source';
-  const share = resolveRules(job.rules).unknownSourceShare.value;
+  const share = resolveRules(rules).unknownSourceShare.value;
   // Bars share one scale: the larger of the limit and the total fills the track.
   const scale = Math.max(limit ?? 0, total, ...segments.map((s) => s.z)) || 1;
   const over = known && limit !== null && total > limit;
@@ -110,7 +113,7 @@ export function BreakdownView({ linkId }: { linkId: string }) {
 
 export function BreakdownPanel() {
   const linkId = useEditor((s) => s.breakdownLink);
-  const name = useEditor((s) => (s.breakdownLink ? s.job.links.find((l) => l.id === s.breakdownLink)?.name : undefined));
+  const name = useEditor((s) => (s.breakdownLink ? selectLink(s.breakdownLink)(s)?.name : undefined));
   const status = useEditor((s) => (s.breakdownLink ? s.resultById[s.breakdownLink]?.status : undefined));
   const pinned = useBreakdownView((v) => v.pinned);
   const collapsed = useBreakdownView((v) => v.collapsed);

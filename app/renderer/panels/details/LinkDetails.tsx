@@ -1,7 +1,8 @@
 // Every field of one link: identity, cable, device, RCD and required time; its results beside.
 
-import { linkRole, resolveRules, STANDARD_SIZES, type Link, type Material } from '../../../../engine/index.js';
-import { useEditor } from '../../store/index.js';
+import { useMemo } from 'react';
+import { linkRole, resolveRules, STANDARD_SIZES, type Link, type Material, type NodeKind } from '../../../../engine/index.js';
+import { selectNode, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { NumberField, Readout, SelectField, TextField } from '../fields/fields.js';
 import { ROLE_LONG, num } from '../format.js';
@@ -35,20 +36,31 @@ export function sizeHint(size: number): string | undefined {
 
 const SIZES_ID = 'lwp-sizes-details';
 
+/** The role word of a link; it depends only on the kinds of its two ends (engine linkRole). */
+function useRole(link: Link, fromKind: NodeKind | undefined, toKind: NodeKind | undefined): string {
+  return useMemo(() => {
+    try {
+      return ROLE_LONG[linkRole(useEditor.getState().job, link.id)] ?? '';
+    } catch {
+      return '';
+    }
+    // The role is a function of the link and its end kinds only, so the job need not be a dependency.
+  }, [link, fromKind, toKind]);
+}
+
+// Only this link's record, its rules and the names and kinds of its two ends are subscribed:
+// a drag elsewhere, or an edit of another link, does not re-render the form.
 export function LinkDetails({ link }: { link: Link }) {
-  const job = useEditor((s) => s.job);
   const id = link.id;
   const set = (field: string) => (v: unknown) => editLink(id, field, v);
   const cable = link.cable;
-  const rules = resolveRules(job.rules);
-  const from = job.nodes.find((n) => n.id === link.from);
-  const to = job.nodes.find((n) => n.id === link.to);
-  let role = '';
-  try {
-    role = ROLE_LONG[linkRole(job, id)] ?? '';
-  } catch {
-    role = '';
-  }
+  const rulesInput = useEditor((s) => s.job.rules);
+  const rules = useMemo(() => resolveRules(rulesInput), [rulesInput]);
+  const fromName = useEditor((s) => selectNode(link.from)(s)?.name);
+  const toName = useEditor((s) => selectNode(link.to)(s)?.name);
+  const fromKind = useEditor((s) => selectNode(link.from)(s)?.kind);
+  const toKind = useEditor((s) => selectNode(link.to)(s)?.kind);
+  const role = useRole(link, fromKind, toKind);
 
   return (
     <div className="lwp-details-body" data-details-link={id}>
@@ -59,7 +71,7 @@ export function LinkDetails({ link }: { link: Link }) {
           <legend>Link</legend>
           <TextField field="id" label="Id" value={id} emptyAs="empty" onCommit={(v) => editLink(id, 'id', v ?? '', `rename ${id}`)} />
           <Readout label="From → to">
-            {link.from}{from?.name ? ` (${from.name})` : ''} → {link.to}{to?.name ? ` (${to.name})` : ''}
+            {link.from}{fromName ? ` (${fromName})` : ''} → {link.to}{toName ? ` (${toName})` : ''}
           </Readout>
           <Readout label="Role">{role || '—'}</Readout>
           <TextField field="name" label="Name" value={link.name} onCommit={set('name')} />
