@@ -1,7 +1,7 @@
 // The one command registry. The toolbar, the sheet's context menu, the keyboard and (desktop)
 // the native menu all look commands up here by id.
 import { faultPath, type NodeKind } from '../../../engine/index.js';
-import { newPart } from '../sheet/parts.js';
+import { freeCentre, newPart } from '../sheet/parts.js';
 import { autoArrange } from '../sheet/arrange.js';
 import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
 import type { Command, CommandContext } from './types.js';
@@ -25,7 +25,8 @@ const hasSelection = (s: { selection: { nodes: string[]; links: string[] } }) =>
 function addPart(kind: NodeKind): Command['run'] {
   return (ctx) => {
     const store = ctx.store.getState();
-    const node = newPart(store.job, kind, ctx.sheet?.cursor() ?? { x: 0, y: 0 });
+    // At the cursor (or the middle of the view), moved to the nearest spot no node covers.
+    const node = newPart(store.job, kind, freeCentre(store.job, kind, ctx.sheet?.cursor() ?? { x: 0, y: 0 }));
     if (store.apply({ op: 'add-node', node }, `add ${kind}`).ok) store.select({ nodes: [node.id], links: [] });
   };
 }

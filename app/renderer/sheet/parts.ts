@@ -21,7 +21,7 @@ export const PART_HINT: Record<NodeKind, string> = {
   point: 'Far end of a final subcircuit (outlet, luminaire, equipment)',
 };
 
-/** A new node of the given kind, centred on `centre` (sheet coordinates). */
+/** A new node of the given kind, centred on `centre` (sheet coordinates); see freeCentre for a clear spot. */
 export function newPart(job: Job, kind: NodeKind, centre: { x: number; y: number }): JobNode {
   const id = nextId(job, prefixFor(kind));
   const size = NODE_SIZE[kind];
@@ -29,4 +29,43 @@ export function newPart(job: Job, kind: NodeKind, centre: { x: number; y: number
   if (kind === 'supply') return { id, kind, name: 'Point of supply', at, source: { type: 'unknown' } };
   if (kind === 'board') return { id, kind, name: `Board ${id}`, at };
   return { id, kind, name: `Point ${id}`, use: 'socket-outlets', at };
+}
+
+/** Clear space kept between a new part and the nodes around it (px): room for a link label above. */
+export const PART_GAP = { x: 24, y: 72 };
+
+function overlaps(job: Job, kind: NodeKind, at: { x: number; y: number }): boolean {
+  const size = NODE_SIZE[kind];
+  return job.nodes.some((n) => {
+    const o = n.at ?? { x: 0, y: 0 };
+    const other = NODE_SIZE[n.kind];
+    return at.x < o.x + other.width + PART_GAP.x && o.x < at.x + size.width + PART_GAP.x
+      && at.y < o.y + other.height + PART_GAP.y && o.y < at.y + size.height + PART_GAP.y;
+  });
+}
+
+/**
+ * The centre nearest `centre` where a new part of this kind overlaps no node: tried on a grid of
+ * part-sized steps, nearest first, right and below counted nearer than left and above (so parts added
+ * one after another at the same spot line up instead of stacking).
+ */
+export function freeCentre(job: Job, kind: NodeKind, centre: { x: number; y: number }, reach = 12): { x: number; y: number } {
+  const size = NODE_SIZE[kind];
+  // Steps of the largest part, so a neighbouring cell clears a node of any kind.
+  const kinds = Object.values(NODE_SIZE);
+  const step = { x: Math.max(...kinds.map((k) => k.width)) + PART_GAP.x, y: Math.max(...kinds.map((k) => k.height)) + PART_GAP.y };
+  const topLeft = (c: { x: number; y: number }) => ({ x: Math.round(c.x - size.width / 2), y: Math.round(c.y - size.height / 2) });
+  const tries: Array<{ col: number; row: number; d: number }> = [];
+  for (let row = -reach; row <= reach; row++) {
+    for (let col = -reach; col <= reach; col++) {
+      // Left and above count as farther, so a clear spot right or below is taken first.
+      tries.push({ col, row, d: Math.hypot(col * step.x * (col < 0 ? 2 : 1), row * step.y * (row < 0 ? 2 : 1)) });
+    }
+  }
+  tries.sort((a, b) => a.d - b.d || b.col - a.col || b.row - a.row);
+  for (const t of tries) {
+    const c = { x: centre.x + t.col * step.x, y: centre.y + t.row * step.y };
+    if (!overlaps(job, kind, topLeft(c))) return c;
+  }
+  return centre;
 }
