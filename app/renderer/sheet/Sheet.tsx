@@ -13,6 +13,8 @@ import { nodeTypes } from './nodes.js';
 import { toFlowEdge, toFlowNode } from './flow.js';
 import { setSheetHandle } from './handle.js';
 import { newPart } from './parts.js';
+import { FIT_PADDING, PART_VIEW_NOTE, firstView } from './view.js';
+import { useUi } from '../app/ui.js';
 
 export const PART_MIME = 'application/x-loopwright-part';
 /** Above this many nodes only what is in view is drawn, and the view jumps rather than glides. */
@@ -81,7 +83,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
 
   useEffect(() => {
     setSheetHandle({
-      fit: () => void flow.fitView({ padding: 0.08, duration: useEditor.getState().job.nodes.length > LARGE ? 0 : 250 }),
+      fit: () => void flow.fitView({ padding: FIT_PADDING, duration: useEditor.getState().job.nodes.length > LARGE ? 0 : 250 }),
       centre,
       cursor: () => {
         if (cursor.current) return cursor.current;
@@ -96,16 +98,20 @@ export function Sheet({ onContextMenu }: SheetProps) {
     if (focus) centre(focus.ids);
   }, [focus, centre]);
 
-  // A job just opened (or a new one started): show it at a readable scale.
+  // A job just opened (or a new one started), and the first job on mount: the whole job when it
+  // fits at a readable zoom, else the supply and the top of its tree, saying how to see it all.
   const documentSeq = useEditor((s) => s.documentSeq);
-  const firstDocument = useRef(documentSeq);
   useEffect(() => {
-    if (documentSeq === firstDocument.current) return; // the first view is React Flow's own fitView
     const frame = requestAnimationFrame(() => {
-      if (useEditor.getState().job.nodes.length === 0) {
-        const box = wrapper.current?.getBoundingClientRect();
-        void flow.setViewport({ x: (box?.width ?? 800) / 2, y: 60, zoom: 1 });
-      } else void flow.fitView({ padding: 0.08, minZoom: 0.5, maxZoom: 1 });
+      const box = wrapper.current?.getBoundingClientRect();
+      const view = firstView(useEditor.getState().job.nodes, { width: box?.width ?? 0, height: box?.height ?? 0 });
+      void flow.setViewport({ x: view.x, y: view.y, zoom: view.zoom });
+      if (!view.whole) {
+        const s = useEditor.getState();
+        const note = PART_VIEW_NOTE.charAt(0).toUpperCase() + PART_VIEW_NOTE.slice(1);
+        if (!s.message) s.setMessage({ kind: 'info', text: note });
+        else if (s.message.kind === 'info' && !s.message.text.includes(PART_VIEW_NOTE)) s.setMessage({ kind: 'info', text: `${s.message.text} — ${PART_VIEW_NOTE}` });
+      }
     });
     return () => cancelAnimationFrame(frame);
   }, [documentSeq, flow]);
@@ -173,6 +179,11 @@ export function Sheet({ onContextMenu }: SheetProps) {
   const onMouseMove = useCallback((e: ReactMouseEvent) => {
     cursor.current = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
   }, [flow]);
+  // Off the sheet (say, clicking a part in the palette) new parts go to the middle of the view;
+  // the spot of a right-click is kept while its context menu is open.
+  const onMouseLeave = useCallback(() => {
+    if (!useUi.getState().contextMenu) cursor.current = null;
+  }, []);
 
   const onDragOver = useCallback((e: DragEvent) => {
     if (e.dataTransfer.types.includes(PART_MIME)) {
@@ -199,7 +210,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
   // Above this size only what is in view is drawn (every link still has its result in the schedule).
   const large = jobNodes.length > LARGE;
   return (
-    <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
+    <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
       <ReactFlow
         nodes={nodes}
         edges={edges}
@@ -225,8 +236,6 @@ export function Sheet({ onContextMenu }: SheetProps) {
         onlyRenderVisibleElements={large}
         minZoom={0.05}
         maxZoom={3}
-        fitView
-        fitViewOptions={{ padding: 0.08, minZoom: 0.5 }}
         proOptions={{ hideAttribution: true }}
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />

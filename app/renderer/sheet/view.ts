@@ -1,0 +1,81 @@
+// The first view of a job just opened: the whole job when it fits at a zoom where labels stay
+// readable; otherwise the supply and the top of its tree at that zoom, the rest a scroll away.
+import type { JobNode } from '../../../engine/index.js';
+import { NODE_SIZE } from './parts.js';
+
+/** Below this zoom the link labels (11 px type) are too small to read. */
+export const READABLE_ZOOM = 0.6;
+/** Fitting never enlarges a small job beyond this. */
+export const FIT_MAX_ZOOM = 1;
+/** Room left around the job, as a share of the view (the same as Fit). */
+export const FIT_PADDING = 0.08;
+
+export interface Viewport {
+  x: number;
+  y: number;
+  zoom: number;
+}
+
+export interface FirstView extends Viewport {
+  /** True when the whole job is in view. */
+  whole: boolean;
+}
+
+export interface Bounds {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
+
+/** The drawn extent of the nodes (sheet coordinates), or null for an empty job. */
+export function jobBounds(nodes: readonly JobNode[]): Bounds | null {
+  if (nodes.length === 0) return null;
+  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  for (const n of nodes) {
+    const at = n.at ?? { x: 0, y: 0 };
+    const size = NODE_SIZE[n.kind];
+    minX = Math.min(minX, at.x);
+    minY = Math.min(minY, at.y);
+    maxX = Math.max(maxX, at.x + size.width);
+    maxY = Math.max(maxY, at.y + size.height);
+  }
+  return { minX, minY, maxX, maxY };
+}
+
+/** The view to open a job with, in a sheet `box` pixels in size. */
+export function firstView(nodes: readonly JobNode[], box: { width: number; height: number }): FirstView {
+  const bounds = jobBounds(nodes);
+  if (!bounds || box.width <= 0 || box.height <= 0) return { x: box.width / 2, y: 60, zoom: 1, whole: true };
+  const w = Math.max(1, bounds.maxX - bounds.minX);
+  const h = Math.max(1, bounds.maxY - bounds.minY);
+  const fit = Math.min((box.width * (1 - 2 * FIT_PADDING)) / w, (box.height * (1 - 2 * FIT_PADDING)) / h);
+  if (fit >= READABLE_ZOOM) {
+    const zoom = Math.min(fit, FIT_MAX_ZOOM);
+    return {
+      x: box.width / 2 - ((bounds.minX + bounds.maxX) / 2) * zoom,
+      y: box.height / 2 - ((bounds.minY + bounds.maxY) / 2) * zoom,
+      zoom,
+      whole: true,
+    };
+  }
+  const zoom = READABLE_ZOOM;
+  const padX = box.width * FIT_PADDING;
+  const padY = box.height * FIT_PADDING;
+  // The supply (else the highest node) is the anchor: the top of its tree is what matters first.
+  const anchor = nodes.find((n) => n.kind === 'supply') ?? [...nodes].sort((a, b) => (a.at?.y ?? 0) - (b.at?.y ?? 0))[0]!;
+  const anchorAt = anchor.at ?? { x: 0, y: 0 };
+  const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
+  // Across: centred on the anchor, but never past either edge of the job when it is wider than the view.
+  const x = w * zoom <= box.width - 2 * padX
+    ? box.width / 2 - ((bounds.minX + bounds.maxX) / 2) * zoom
+    : clamp(box.width / 2 - (anchorAt.x + NODE_SIZE[anchor.kind].width / 2) * zoom, box.width - padX - bounds.maxX * zoom, padX - bounds.minX * zoom);
+  // Down: the anchor at the top of the view, or the job centred when it is not that tall.
+  const y = h * zoom <= box.height - 2 * padY
+    ? box.height / 2 - ((bounds.minY + bounds.maxY) / 2) * zoom
+    : clamp(padY - anchorAt.y * zoom, box.height - padY - bounds.maxY * zoom, padY - bounds.minY * zoom);
+  return { x, y, zoom, whole: false };
+}
+
+/** What the status bar says when the first view shows only part of the job. */
+export const PART_VIEW_NOTE = 'part of the job is out of view; Fit (Shift+1) shows all of it';
