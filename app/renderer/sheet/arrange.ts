@@ -47,6 +47,25 @@ export async function autoArrange(job: Job): Promise<Array<{ id: string; at: { x
 }
 
 /**
+ * Positions for the nodes that have none (a job written by another tool): the whole job laid
+ * out when no node has a position; otherwise only the missing ones, laid out among themselves
+ * and set to the right of what the user drew, which is never moved.
+ */
+export async function positionsForMissing(job: Job): Promise<Array<{ id: string; at: { x: number; y: number } }>> {
+  const missing = new Set(job.nodes.filter((n) => n.at === undefined).map((n) => n.id));
+  if (missing.size === 0) return [];
+  const arranged = await autoArrange(job);
+  if (missing.size === job.nodes.length) return arranged;
+  const placed = job.nodes.filter((n) => n.at !== undefined);
+  const right = Math.max(...placed.map((n) => n.at!.x + NODE_SIZE[n.kind].width));
+  const top = Math.min(...placed.map((n) => n.at!.y));
+  const mine = arranged.filter((m) => missing.has(m.id));
+  const left = Math.min(...mine.map((m) => m.at.x));
+  const high = Math.min(...mine.map((m) => m.at.y));
+  return mine.map((m) => ({ id: m.id, at: { x: m.at.x - left + right + LABEL_WIDTH, y: m.at.y - high + top } }));
+}
+
+/**
  * Tidies the layered result the way single-line diagrams are drawn: each board sits centred over
  * the circuits it feeds, where that leaves room beside its neighbours in the same row.
  */

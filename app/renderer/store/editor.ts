@@ -202,6 +202,17 @@ export const useEditor = create<EditorState>()((set, get) => {
         message: null,
         documentSeq: get().documentSeq + 1,
       });
+      // A job written by another tool may have no drawing positions: lay those nodes out
+      // (not an edit of the user's: no undo step, and a job that was clean stays clean).
+      if (job.nodes.some((n) => n.at === undefined)) {
+        void import('../sheet/arrange.js').then(async ({ positionsForMissing }) => {
+          const moves = await positionsForMissing(job);
+          if (get().job !== job || moves.length === 0) return;
+          const next = applyEdit(job, { op: 'move', moves });
+          if (savedJob === job) savedJob = next;
+          become(next, false, { documentSeq: get().documentSeq + 1 });
+        });
+      }
     },
 
     select(sel) {
