@@ -76,8 +76,14 @@ function blocks(job: Job, rules: ResolvedRules, caution: string): Block[] {
   return out;
 }
 
-/** The assumptions as pages of items, each filling `box`. */
-export function assumptionPages(job: Job, rules: ResolvedRules, caution: string, box: Box): Item[][] {
+/** A block printed after the assumptions (the diagram's legend when no diagram sheet holds it). */
+export interface Tail {
+  height: number;
+  draw: (top: number) => Item[];
+}
+
+/** The assumptions as pages of items, each filling `box`, then `tail` if given. */
+export function assumptionPages(job: Job, rules: ResolvedRules, caution: string, box: Box, tail?: Tail): Item[][] {
   const pages: Item[][] = [[]];
   let page = pages[0] ?? [];
   let y = box.y;
@@ -123,6 +129,10 @@ export function assumptionPages(job: Job, rules: ResolvedRules, caution: string,
       y += h;
       page.push({ kind: 'line', x1: box.x, y1: y, x2: box.x + box.w, y2: y, stroke: stroke(0.15, GREY) });
     }
+  }
+  if (tail !== undefined) {
+    need(tail.height + 5);
+    page.push(...tail.draw(y + 5));
   }
   return pages;
 }

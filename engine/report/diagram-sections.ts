@@ -1,10 +1,8 @@
 // The diagram split by subtree, for a drawing too large for one sheet at a readable size: one
 // section per board (or supply), its circuits hanging in rows from a bus, every board fed from
 // it drawn as a stub that names the sheet it continues on, and each board's own section headed
-// by a "fed from" stub repeating the link that feeds it. Sections are packed onto sheets in
-// reading order from the supply down; a section too long for the room left continues on the
-// next sheet at a row boundary, its board repeated at the head. Circuits keep the order drawn
-// (left to right), or file order for a job without positions.
+// by a "fed from" stub repeating the link that feeds it. diagram-pack.ts packs the sections onto
+// sheets. Circuits keep the order drawn (left to right), or file order for a job without positions.
 
 import type { Job, JobNode, Link } from '../model/types.js';
 import { BLOCK, BUS } from './diagram-plan.js';
@@ -25,7 +23,8 @@ export const FED_H = 26;
 /** Height of the head of a section continued from an earlier sheet, mm. */
 export const CONT_H = 5;
 const ROW_GAP = 3;
-const PIECE_GAP = 4;
+/** How many narrower shapes a section offers the packer. */
+const MAX_ALTS = 3;
 
 export interface ColumnNode {
   id: string;
@@ -57,6 +56,8 @@ export interface Section {
   /** Height of each row, bus to bottom, mm. */
   rowH: number[];
   w: number;
+  /** The same section in narrower shapes (more rows), narrowest last. */
+  alts: Section[];
 }
 
 export interface Piece {
@@ -73,6 +74,8 @@ export interface Piece {
 
 export interface SectionPlan {
   sheets: Piece[][];
+  /** The diagram sheet (0-based) whose foot holds the full legend, or null for none (it goes after the diagram). */
+  legendSheet: number | null;
   /** Sheet index (0-based) where each node is drawn in full (a stub's is its own section's). */
   sheetOf: Map<string, number>;
 }
@@ -89,7 +92,7 @@ function order(job: Job, links: Link[], nodes: Map<string, JobNode>): Link[] {
 }
 
 /** Sections in reading order, or null when one cannot fit the area at all. */
-function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
+export function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
   const nodes = new Map(job.nodes.map((n) => [n.id, n]));
   const kids = new Map<string, Link[]>();
   const feed = new Map<string, Link>();
@@ -136,27 +139,17 @@ function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
     }
     const cols = children(end).map(column);
     if (cols.some((c) => c.slots > maxCols)) return false;
-    // Balanced rows: as few as the width allows, the columns spread evenly over them.
+    // Balanced rows: as few as the width allows, the columns spread evenly over them; narrower
+    // shapes (more rows) kept as alternatives for the packer to set beside another section.
     const total = cols.reduce((s, c) => s + c.slots, 0);
     const rowsNeeded = total === 0 ? 0 : Math.ceil(total / maxCols);
-    const rows: Column[][] = [];
-    let current: Column[] = [];
-    let used = 0;
-    const target = rowsNeeded === 0 ? 0 : Math.ceil(total / rowsNeeded);
-    for (const c of cols) {
-      if (current.length > 0 && (used + c.slots > maxCols || used >= target)) {
-        rows.push(current);
-        current = [];
-        used = 0;
-      }
-      current.push(c);
-      used += c.slots;
+    const made: Section = { root, fedBy, spine, ...shape(cols, rowsNeeded, maxCols), alts: [] };
+    for (let n = rowsNeeded + 1; n <= Math.min(cols.length, rowsNeeded + MAX_ALTS); n++) {
+      const alt = shape(cols, n, maxCols);
+      const last = made.alts[made.alts.length - 1] ?? made;
+      if (alt.w < last.w) made.alts.push({ root, fedBy, spine, ...alt, alts: [] });
     }
-    if (current.length > 0) rows.push(current);
-    const rowH = rows.map((r) => DROP + (Math.max(...r.map((c) => c.levels)) - 1) * LEVEL + NODE_BOTTOM + ROW_GAP);
-    const widest = Math.max(0, ...rows.map((r) => r.reduce((s, c) => s + c.slots, 0)));
-    const w = widest === 0 ? 6 + 32 : 6 + GUTTER + (widest - 1) * CW + 32;
-    const made: Section = { root, fedBy, spine, rows, rowH, w };
+    const { rows, rowH } = made;
     // A spine so long that its head and first row no longer fit a sheet: each board on its own.
     if (join && spine.length > 1 && headHeight(made, true) + (rowH[0] ?? 0) > area.h) return section(root, fedBy, false);
     sections.push(made);
@@ -170,99 +163,32 @@ function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
   return sections;
 }
 
+/** Columns in `n` rows of about equal width (none wider than `maxCols` slots), with their size. */
+function shape(cols: Column[], n: number, maxCols: number): { rows: Column[][]; rowH: number[]; w: number } {
+  const total = cols.reduce((s, c) => s + c.slots, 0);
+  const rows: Column[][] = [];
+  let current: Column[] = [];
+  let used = 0;
+  const target = n === 0 ? 0 : Math.ceil(total / n);
+  for (const c of cols) {
+    if (current.length > 0 && (used + c.slots > maxCols || used >= target)) {
+      rows.push(current);
+      current = [];
+      used = 0;
+    }
+    current.push(c);
+    used += c.slots;
+  }
+  if (current.length > 0) rows.push(current);
+  const rowH = rows.map((r) => DROP + (Math.max(...r.map((c) => c.levels)) - 1) * LEVEL + NODE_BOTTOM + ROW_GAP);
+  const widest = Math.max(0, ...rows.map((r) => r.reduce((s, c) => s + c.slots, 0)));
+  const w = widest === 0 ? 6 + 32 : 6 + GUTTER + (widest - 1) * CW + 32;
+  return { rows, rowH, w };
+}
+
 /** Height of a section's head: the fed-from stub and the spine down to the first bus. */
 export function headHeight(s: Section, first: boolean): number {
   if (!first) return CONT_H + BUS;
   const top = s.fedBy !== null ? FED_H : 4;
   return top + (s.spine.length - 1) * LEVEL + (s.rows.length > 0 ? BUS : NODE_BOTTOM);
-}
-
-function sum(list: number[], from: number, to: number): number {
-  let t = 0;
-  for (let i = from; i < to; i++) t += list[i] ?? 0;
-  return t;
-}
-
-/** Pack the sections onto sheets of `area`, shelf by shelf; null when a row cannot fit a sheet. */
-function pack(sections: Section[], area: Box): Piece[][] | null {
-  const sheets: Piece[][] = [[]];
-  let shelfY = 0;
-  let shelfBottom = 0;
-  let cursorX = 0;
-  const newSheet = (): void => {
-    sheets.push([]);
-    shelfY = 0;
-    shelfBottom = 0;
-    cursorX = 0;
-  };
-  for (const s of sections) {
-    let from = 0;
-    let first = true;
-    const rowsLeft = (): number => s.rows.length - from;
-    while (first || rowsLeft() > 0) {
-      const head = headHeight(s, first);
-      const whole = head + sum(s.rowH, from, s.rows.length);
-      const sheet = sheets[sheets.length - 1] ?? [];
-      const place = (x: number, y: number, to: number, h: number): void => {
-        sheet.push({ section: s, first, from, to, x, y, w: s.w, h });
-        cursorX = x + s.w + PIECE_GAP;
-        shelfBottom = Math.max(shelfBottom, y + h);
-        from = to;
-        first = false;
-      };
-      // Beside the pieces already on this shelf.
-      if (sheet.length > 0 && cursorX + s.w <= area.w && shelfY + whole <= area.h) {
-        place(cursorX, shelfY, s.rows.length, whole);
-        continue;
-      }
-      // On a new shelf below, whole or as many rows as fit.
-      const y = sheet.length === 0 ? 0 : shelfBottom + PIECE_GAP;
-      if (y + whole <= area.h) {
-        shelfY = y;
-        place(0, y, s.rows.length, whole);
-        continue;
-      }
-      let fit = from;
-      while (fit < s.rows.length && y + head + sum(s.rowH, from, fit + 1) <= area.h) fit++;
-      if (fit > from) {
-        shelfY = y;
-        place(0, y, fit, head + sum(s.rowH, from, fit));
-        newSheet();
-        continue;
-      }
-      if (sheet.length === 0) return null; // not even one row fits an empty sheet
-      newSheet();
-    }
-  }
-  return sheets.filter((sh) => sh.length > 0);
-}
-
-/** The section plan for `area`, or null when the drawing cannot be split this way. */
-export function planSections(job: Job, area: Box): SectionPlan | null {
-  for (const inline of [true, false]) {
-    const sections = buildSections(job, area, inline);
-    if (sections === null) continue;
-    const sheets = pack(sections, area);
-    if (sheets === null) continue;
-    const sheetOf = new Map<string, number>();
-    sheets.forEach((pieces, i) => pieces.forEach((p) => {
-      if (p.first) for (const s of p.section.spine) sheetOf.set(s.id, i);
-      for (const row of p.section.rows.slice(p.from, p.to)) {
-        for (const c of row) for (const n of c.nodes) if (!n.stub) sheetOf.set(n.id, i);
-      }
-    }));
-    // Centre each sheet's content in the area.
-    for (const pieces of sheets) {
-      const w = Math.max(...pieces.map((p) => p.x + p.w));
-      const h = Math.max(...pieces.map((p) => p.y + p.h));
-      const dx = area.x + Math.max(0, (area.w - w) / 2);
-      const dy = area.y + Math.max(0, (area.h - h) / 2);
-      for (const p of pieces) {
-        p.x += dx;
-        p.y += dy;
-      }
-    }
-    return { sheets, sheetOf };
-  }
-  return null;
 }

@@ -8,10 +8,10 @@ import { assumptionPages, BASIS_TITLE } from './assumptions.js';
 import { diagramContext, drawTile } from './diagram.js';
 import { planDiagram } from './diagram-plan.js';
 import { drawPiece } from './diagram-sheet.js';
-import { planSections } from './diagram-sections.js';
+import { planSections } from './diagram-pack.js';
 import { GREY, text } from './draw.js';
-import { legend } from './legend.js';
-import { contentBox, paperFor } from './paper.js';
+import { keyLine, legend } from './legend.js';
+import { contentBox, paperFor, type Box } from './paper.js';
 import { schedulePages } from './schedule.js';
 import { titleBlock } from './title-block.js';
 import type { Item, ReportOptions, Sheet, SheetKind } from './types.js';
@@ -26,28 +26,40 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
   const pages: Array<{ kind: SheetKind; title: string; items: Item[] }> = [];
 
   // Diagram: the legend along the foot of the content area, the drawing above it.
-  const sectionNote = (auto: boolean): string =>
-    'Too large for one sheet with text of 2 mm or more, so drawn board by board in reading order from the supply, circuits in the order ' +
+  const sectionNote = (auto: boolean, sheets = 2): string =>
+    `${sheets > 1 ? 'Too large for one sheet' : 'Too large for the sheet as positioned'} with text of 2 mm or more, so drawn board by board in reading order from the supply, circuits in the order ` +
     `${auto ? 'of the job file' : 'drawn (left to right)'}. A board drawn as a stub says the sheet it continues on; each board's ` +
     'own part starts with the link that feeds it, repeated.';
   // The legend's height with the longest note it may carry, so the drawing area is known first.
   const probe = legend({ x: content.x, y: 0, w: content.w, h: 0 }, [sectionNote(true)]);
   const legendTop = content.y + content.h - probe.height;
+  // The one-line key a diagram sheet carries instead of the legend (split by board only).
+  const keyH = keyLine({ x: content.x, y: 0, w: content.w, h: 0 }, 'sheet 99').height;
   const area = { x: content.x, y: content.y + MARK_BAND, w: content.w, h: legendTop - content.y - 2 * MARK_BAND - 2 };
   const plan = planDiagram(job, area);
   const ctx = diagramContext(job, results, plan, (t) => t + 1, rules.voltage.value);
   // Too large for one sheet at the user's positions: one section per board, packed in reading
-  // order from the supply; cutting the drawing into tiles is the last resort.
+  // order from the supply, the full legend on one sheet only; cutting the drawing into tiles
+  // (the legend on every tile) is the last resort.
   const sections = plan.tiles.length > 1
-    ? planSections(job, { x: content.x, y: content.y, w: content.w, h: legendTop - content.y - 3 })
+    ? planSections(job, { x: content.x, y: content.y, w: content.w, h: content.h - keyH - 3 }, probe.height - keyH)
     : null;
   const count = sections !== null ? sections.sheets.length : Math.max(plan.tiles.length, 1);
   const notes = [
     sections !== null
-      ? sectionNote(plan.auto)
+      ? sectionNote(plan.auto, count)
       : plan.auto ? 'Positions arranged automatically (the job has nodes without a drawn position).' : 'Positions as drawn in the job.',
     sections === null && count > 1 ? `Split over ${count} sheets so that no text is smaller than 2 mm; arrows at the edges name the sheet a link continues on.` : '',
   ].filter((n) => n !== '');
+  const schedule = schedulePages(job, results, content);
+  const legendBox = (top: number): Box => ({ x: content.x, y: top, w: content.w, h: probe.height });
+  // Split by board with no diagram sheet to spare for the legend: it follows the assumptions.
+  const legendAfter = sections !== null && sections.legendSheet === null;
+  const assumptions = assumptionPages(job, rules, caution, content, legendAfter
+    ? { height: legend(legendBox(0), notes).height, draw: (top) => legend(legendBox(top), notes).items }
+    : undefined);
+  const legendSheetNo = sections === null ? 0 : sections.legendSheet !== null ? sections.legendSheet + 1 : count + schedule.length + assumptions.length;
+
   for (let t = 0; t < count; t++) {
     let items: Item[];
     let what = '';
@@ -55,21 +67,24 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
       const pieces = sections.sheets[t] ?? [];
       items = pieces.flatMap((p) => drawPiece(ctx, sections, p, t, (i) => i + 1));
       what = `: ${pieces.map((p) => `${p.section.spine.map((n) => n.id).join(', ')}${p.first ? '' : ' (cont.)'}`).join('; ')}`;
-    } else if (plan.tiles.length === 0) {
-      items = [text(area.x + area.w / 2, area.y + area.h / 2, 'The job has no nodes to draw.', 4, 'bold', 'middle', GREY)];
-    } else items = drawTile(ctx, t);
-    items.push(...legend({ x: content.x, y: legendTop, w: content.w, h: probe.height }, notes).items);
+      if (t === sections.legendSheet) items.push(...legend(legendBox(legendTop), notes).items);
+      else items.push(...keyLine({ x: content.x, y: content.y + content.h - keyH, w: content.w, h: keyH }, `sheet ${legendSheetNo}`).items);
+    } else {
+      if (plan.tiles.length === 0) {
+        items = [text(area.x + area.w / 2, area.y + area.h / 2, 'The job has no nodes to draw.', 4, 'bold', 'middle', GREY)];
+      } else items = drawTile(ctx, t);
+      items.push(...legend(legendBox(legendTop), notes).items);
+    }
     pages.push({ kind: 'diagram', title: count > 1 ? `Single-line diagram, part ${t + 1} of ${count}${what}` : 'Single-line diagram', items });
   }
 
-  const schedule = schedulePages(job, results, content);
   schedule.forEach((items, i) =>
     pages.push({ kind: 'schedule', title: schedule.length > 1 ? `Circuit schedule, part ${i + 1} of ${schedule.length}` : 'Circuit schedule', items }),
   );
-  const assumptions = assumptionPages(job, rules, caution, content);
-  assumptions.forEach((items, i) =>
-    pages.push({ kind: 'assumptions', title: assumptions.length > 1 ? `Assumptions, part ${i + 1} of ${assumptions.length}` : 'Assumptions and caution', items }),
-  );
+  assumptions.forEach((items, i) => {
+    const title = assumptions.length > 1 ? `Assumptions, part ${i + 1} of ${assumptions.length}` : 'Assumptions and caution';
+    pages.push({ kind: 'assumptions', title: legendAfter && i === assumptions.length - 1 ? `${title}; legend of the diagram` : title, items });
+  });
 
   return pages.map((p, i) => ({
     widthMm: paper.widthMm,

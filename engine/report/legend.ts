@@ -1,5 +1,5 @@
-// The legend on every diagram sheet: every symbol and line style the diagram uses, and how to
-// read a link's label.
+// The legend: every symbol and line style the diagram uses, and how to read a link's label; and
+// the one-line key that points to it from the diagram sheets without it.
 
 import type { Status } from '../analysis/results.js';
 import { arrowHead, deviceSymbol, GREY, line, nodeSymbol, rcdSymbol, statusSymbol, stroke, text } from './draw.js';
@@ -83,5 +83,23 @@ export function legend(box: Box, notes: string[]): { items: Item[]; height: numb
   y += keyLines.length * LH + 1.5;
   const height = y - box.y;
   items.unshift({ kind: 'rect', x: box.x, y: box.y, w: box.w, h: height, stroke: stroke(0.25) });
+  return { items, height };
+}
+
+/**
+ * The one-line key on a diagram sheet without the legend: where the legend is, and how a link's
+ * label reads. The shortest wording that fits one line is used.
+ */
+export function keyLine(box: Box, where: string): { items: Item[]; height: number } {
+  const variants = [
+    `Key: the legend on ${where} explains every symbol and line style. Label beside each link, line by line: id and name · device, RCD · cable, length · loop against its limit (Ω) · status, share of the limit.`,
+    `Key: the legend on ${where} explains every symbol. Link label: id, name · device, RCD · cable, length · loop vs limit (Ω) · status.`,
+    `Key: see the legend on ${where} for every symbol and the link label.`,
+  ];
+  const line1 = variants.find((v) => textWidth(v, 'regular', T) <= box.w - 3) ?? variants[variants.length - 1] ?? '';
+  const lines = wrap(line1, 'regular', T, box.w - 3);
+  const height = lines.length * LH + 1.6;
+  const items: Item[] = [{ kind: 'rect', x: box.x, y: box.y, w: box.w, h: height, stroke: stroke(0.25) }];
+  lines.forEach((l, i) => items.push(text(box.x + 1.5, box.y + LH * (i + 1) - 0.2, l, T, 'regular', 'start', GREY)));
   return { items, height };
 }

@@ -95,7 +95,8 @@ describe('layoutReport: paper', () => {
     for (const job of [generatedJob(), demoJob()]) {
       const sheets = layoutReport(job, analyse(job), options);
       const diagram = sheets.filter((s) => s.kind === 'diagram');
-      expect(diagram.length).toBeGreaterThan(1);
+      // The demo fits one A3 portrait sheet drawn board by board; the generated job never does.
+      if (job.nodes.length > 100) expect(diagram.length).toBeGreaterThan(1);
       // Reading order: the supply's sheet comes first.
       expect(texts(diagram[0]!).map((t) => t.text)).toContain('S1');
       // Each board drawn as a stub says where it continues, and that sheet is headed by its feed.
@@ -112,8 +113,42 @@ describe('layoutReport: paper', () => {
           expect(texts(target).some((x) => x.text.startsWith('fed from') && texts(target).some((y) => y.text === id))).toBe(true);
         });
       });
-      expect(allText(diagram)).toMatch(/cont\. on sheet \d+/);
+      expect(allText(diagram)).toMatch(diagram.length > 1 ? /cont\. on sheet \d+/ : /cont\. (below|to the right)/);
       expect(allText(diagram)).toMatch(/fed from MSB/);
+    }
+  });
+
+  it.each(PAPERS)('prints the full legend once, the other diagram sheets pointing to it in one line (%o)', (options) => {
+    for (const job of [generatedJob(), demoJob()]) {
+      const sheets = layoutReport(job, analyse(job), options);
+      const withLegend = sheets.flatMap((s, i) => (texts(s).some((t) => t.text === 'Legend') ? [i + 1] : []));
+      expect(withLegend).toHaveLength(1);
+      const n = withLegend[0]!;
+      sheets.forEach((s, i) => {
+        if (s.kind !== 'diagram' || i + 1 === n) return;
+        const keys = texts(s).filter((t) => t.text.startsWith('Key:'));
+        expect(keys).toHaveLength(1);
+        expect(keys[0]!.text).toContain(`legend on sheet ${n}`);
+      });
+      // Every symbol's explanation is in that legend.
+      const legendText = texts(sheets[n - 1]!).map((t) => t.text).join(' ');
+      for (const word of ['PASS:', 'FAIL:', 'RCD-RELIANT:', 'UNCHECKED:', 'worst fault path', 'link not checked', 'continues on the sheet']) {
+        expect(legendText).toContain(word);
+      }
+    }
+  });
+
+  it('gives the demo on A4 landscape two full diagram sheets, the last not left with one board', () => {
+    for (const options of PAPERS) {
+      const job = demoJob();
+      const diagram = layoutReport(job, analyse(job), options).filter((s) => s.kind === 'diagram');
+      if (options.paper === 'A4' && options.orientation === 'landscape') {
+        expect(diagram).toHaveLength(2); // was 5 with the legend on every sheet
+        const first = texts(diagram[0]!).map((t) => t.text);
+        for (const id of ['S1', 'M1', 'MSB', 'C01', 'C03b', 'C05', 'SM1', 'SM2']) expect(first).toContain(id);
+      }
+      // Balanced: with more than one sheet, the last holds more than one board's part.
+      if (diagram.length > 1) expect(diagram[diagram.length - 1]!.title.split('; ').length, JSON.stringify(options)).toBeGreaterThan(1);
     }
   });
 

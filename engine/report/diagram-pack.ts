@@ -1,0 +1,146 @@
+// Packing the diagram's sections (diagram-sections.ts) onto sheets, in reading order from the
+// supply down, shelf by shelf; a section too long for the room left continues on the next sheet
+// at a row boundary, its board repeated at the head. The full legend takes the foot of one
+// diagram sheet (the first that can hold it without costing a sheet or a split section); the
+// others carry a one-line key. Then the sheets are balanced: the same number of sheets and no
+// more split sections, but the smallest height every sheet must hold, so the last sheet is not
+// left with one board while the first is crammed.
+
+import type { Job } from '../model/types.js';
+import { buildSections, headHeight, type Piece, type Section, type SectionPlan } from './diagram-sections.js';
+import type { Box } from './paper.js';
+
+const PIECE_GAP = 4;
+/** Step of the balancing search, mm. */
+const BALANCE_STEP = 1;
+
+function sum(list: number[], from: number, to: number): number {
+  let t = 0;
+  for (let i = from; i < to; i++) t += list[i] ?? 0;
+  return t;
+}
+
+/**
+ * Pack the sections onto sheets of width `width`, sheet i holding at most `room(i)` mm of height;
+ * null when a row cannot fit an empty sheet.
+ */
+function pack(sections: Section[], width: number, room: (sheet: number) => number): Piece[][] | null {
+  const sheets: Piece[][] = [[]];
+  let shelfY = 0;
+  let shelfBottom = 0;
+  let cursorX = 0;
+  const newSheet = (): void => {
+    sheets.push([]);
+    shelfY = 0;
+    shelfBottom = 0;
+    cursorX = 0;
+  };
+  for (const s of sections) {
+    let from = 0;
+    let first = true;
+    const rowsLeft = (): number => s.rows.length - from;
+    while (first || rowsLeft() > 0) {
+      const h = room(sheets.length - 1);
+      const head = headHeight(s, first);
+      const whole = head + sum(s.rowH, from, s.rows.length);
+      const sheet = sheets[sheets.length - 1] ?? [];
+      const place = (x: number, y: number, to: number, ph: number, as = s): void => {
+        sheet.push({ section: as, first, from, to, x, y, w: as.w, h: ph });
+        cursorX = x + as.w + PIECE_GAP;
+        shelfBottom = Math.max(shelfBottom, y + ph);
+        from = to;
+        first = false;
+      };
+      // Beside the pieces already on this shelf, in a narrower shape if that one fits.
+      const beside = sheet.length === 0 ? undefined : (first ? [s, ...s.alts] : [s]).find((v) =>
+        cursorX + v.w <= width && shelfY + headHeight(v, first) + sum(v.rowH, from, v.rows.length) <= h);
+      if (beside !== undefined) {
+        place(cursorX, shelfY, beside.rows.length, headHeight(beside, first) + sum(beside.rowH, from, beside.rows.length), beside);
+        continue;
+      }
+      // On a new shelf below, whole or as many rows as fit.
+      const y = sheet.length === 0 ? 0 : shelfBottom + PIECE_GAP;
+      if (y + whole <= h) {
+        shelfY = y;
+        place(0, y, s.rows.length, whole);
+        continue;
+      }
+      let fit = from;
+      while (fit < s.rows.length && y + head + sum(s.rowH, from, fit + 1) <= h) fit++;
+      if (fit > from) {
+        shelfY = y;
+        place(0, y, fit, head + sum(s.rowH, from, fit));
+        newSheet();
+        continue;
+      }
+      if (sheet.length === 0) return null; // not even one row fits an empty sheet
+      newSheet();
+    }
+  }
+  return sheets.filter((sh) => sh.length > 0);
+}
+
+/** How many sections are cut over more than one piece. */
+function splits(sheets: Piece[][]): number {
+  return sheets.reduce((n, pieces) => n + pieces.filter((p) => !p.first).length, 0);
+}
+
+function used(pieces: Piece[]): number {
+  return Math.max(0, ...pieces.map((p) => p.y + p.h));
+}
+
+/**
+ * The section plan for `area` (the drawing room of a sheet with the one-line key at its foot),
+ * or null when the drawing cannot be split this way. `legendExtra` is how much more height the
+ * full legend takes than the key line.
+ */
+export function planSections(job: Job, area: Box, legendExtra: number): SectionPlan | null {
+  for (const inline of [true, false]) {
+    const sections = buildSections(job, area, inline);
+    if (sections === null) continue;
+    const base = pack(sections, area.w, () => area.h);
+    if (base === null) continue;
+    const count = base.length;
+    // The legend on the earliest sheet that can take it at no cost, else after the diagram.
+    let legendSheet: number | null = null;
+    let best = base;
+    for (let k = 0; k < count; k++) {
+      const p = pack(sections, area.w, (i) => (i === k ? area.h - legendExtra : area.h));
+      if (p !== null && p.length === count && splits(p) <= splits(base)) {
+        legendSheet = k;
+        best = p;
+        break;
+      }
+    }
+    const room = (i: number): number => (i === legendSheet ? area.h - legendExtra : area.h);
+    // Balance: the lowest ceiling that keeps the sheet count and the splits.
+    const limitSplits = splits(best);
+    const floor = Math.max(...sections.map((s) => headHeight(s, true)));
+    for (let limit = Math.max(...best.map(used)) - BALANCE_STEP; limit >= floor; limit -= BALANCE_STEP) {
+      const p = pack(sections, area.w, (i) => Math.min(limit, room(i)));
+      if (p === null || p.length !== count || splits(p) > limitSplits) continue;
+      best = p;
+    }
+    const sheets = best;
+    const sheetOf = new Map<string, number>();
+    sheets.forEach((pieces, i) => pieces.forEach((p) => {
+      if (p.first) for (const s of p.section.spine) sheetOf.set(s.id, i);
+      for (const row of p.section.rows.slice(p.from, p.to)) {
+        for (const c of row) for (const n of c.nodes) if (!n.stub) sheetOf.set(n.id, i);
+      }
+    }));
+    // Centre each sheet's content in its room.
+    sheets.forEach((pieces, i) => {
+      const w = Math.max(...pieces.map((p) => p.x + p.w));
+      const h = used(pieces);
+      const dx = area.x + Math.max(0, (area.w - w) / 2);
+      const dy = area.y + Math.max(0, (room(i) - h) / 2);
+      for (const p of pieces) {
+        p.x += dx;
+        p.y += dy;
+      }
+    });
+    return { sheets, legendSheet, sheetOf };
+  }
+  return null;
+}
