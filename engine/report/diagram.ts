@@ -80,9 +80,38 @@ export function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
   return items;
 }
 
+/** `name` in at most `max` lines, the first `firstW` mm wide and the others `restW`; the last cut with "…". */
+function nameLines(name: string, firstW: number, restW: number, max: number): string[] {
+  const words = name.split(/\s+/).filter((w) => w !== '');
+  const lines: string[] = [];
+  let k = 0;
+  while (k < words.length && lines.length < max) {
+    const w = lines.length === 0 ? firstW : restW;
+    if (lines.length === max - 1) {
+      lines.push(truncate(words.slice(k).join(' '), 'regular', LABEL_TEXT, w));
+      break;
+    }
+    let line = '';
+    while (k < words.length) {
+      const candidate = line === '' ? (words[k] ?? '') : `${line} ${words[k] ?? ''}`;
+      if (textWidth(candidate, 'regular', LABEL_TEXT) > w) break;
+      line = candidate;
+      k++;
+    }
+    // A word wider than a whole line: cut it there rather than lose the rest of the name.
+    if (line === '' && lines.length > 0) {
+      line = truncate(words[k] ?? '', 'regular', LABEL_TEXT, w);
+      k++;
+    }
+    lines.push(line);
+  }
+  return lines;
+}
+
 /**
- * The node's symbol and its id, name and one more line to the right. With `extra` (a stub or a
- * continued head), the name keeps to the first line and `extra` follows it in bold.
+ * The node's symbol and its id and name (on up to three lines) to the right, with one line kept
+ * for `extra` (a stub's or a continued head's note, in bold), the worst-path mark, or the supply's
+ * source.
  */
 export function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number, extra?: string): Item[] {
   const items: Item[] = nodeSymbol(node.kind, x, y);
@@ -90,31 +119,18 @@ export function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number, extra?:
   const width = x + BLOCK.right - nx;
   const idW = textWidth(`${node.id} `, 'bold', LABEL_TEXT);
   items.push(text(nx, y + 0.8, truncate(node.id, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
-  const name = node.name ?? '';
-  let lineNo = 1;
-  if (name !== '') {
-    const words = name.split(/\s+/).filter((w) => w !== '');
-    let first = '';
-    let used = 0;
-    for (const w of words) {
-      const candidate = first === '' ? w : `${first} ${w}`;
-      if (textWidth(candidate, 'regular', LABEL_TEXT) > width - idW) break;
-      first = candidate;
-      used++;
-    }
-    const rest = words.slice(used).join(' ');
-    if (extra !== undefined) first = truncate(name, 'regular', LABEL_TEXT, width - idW);
-    if (first !== '') items.push(text(nx + idW, y + 0.8, first, LABEL_TEXT));
-    if (rest !== '' && extra === undefined) {
-      items.push(text(nx, y + 0.8 + LH, truncate(rest, 'regular', LABEL_TEXT, width), LABEL_TEXT));
-      lineNo = 2;
-    }
-  }
+  const worst = ctx.worstEnd === node.id;
+  const reserved = (extra !== undefined ? 1 : 0) + (worst || node.kind === 'supply' ? 1 : 0);
+  const names = nameLines(node.name ?? '', width - idW, width, Math.max(1, 3 - reserved));
+  names.forEach((l, i) => {
+    if (l !== '') items.push(text(i === 0 ? nx + idW : nx, y + 0.8 + i * LH, l, LABEL_TEXT));
+  });
+  let lineNo = Math.max(1, names.length);
   if (extra !== undefined) {
     items.push(text(nx, y + 0.8 + lineNo * LH, truncate(extra, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
     lineNo++;
   }
-  if (ctx.worstEnd === node.id) {
+  if (worst) {
     items.push(text(nx, y + 0.8 + lineNo * LH, truncate('worst fault path', 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
   } else if (node.kind === 'supply' && lineNo < 3 && extra === undefined) {
     items.push(text(nx, y + 0.8 + lineNo * LH, truncate(describeSourceShort(node.source, ctx.u0), 'regular', LABEL_TEXT, width), LABEL_TEXT, 'regular', 'start', GREY));

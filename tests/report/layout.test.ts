@@ -152,6 +152,21 @@ describe('layoutReport: paper', () => {
     }
   });
 
+  it.each(PAPERS)('gives a long board name a second line beside its symbol before cutting it (%o)', (options) => {
+    const job = demoJob();
+    const diagram = layoutReport(job, analyse(job), options).filter((s) => s.kind === 'diagram');
+    const names = job.nodes.filter((n) => n.kind !== 'point').map((n) => n.name ?? '');
+    expect(names).toContain('DB-C chandlery and showroom');
+    for (const sheet of diagram) {
+      const cut = texts(sheet).filter((t) => t.text.endsWith('…')).map((t) => t.text.slice(0, -1));
+      // No node name of the demo is cut: each fits its two or three lines.
+      for (const c of cut) expect(names.some((n) => c !== '' && n.includes(c)), `"${c}…" on ${sheet.title}`).toBe(false);
+    }
+    const all = allText(diagram).split('\n');
+    expect(all).toContain('DB-C chandlery');
+    expect(all).toContain('and showroom');
+  });
+
   it('packs the 200-circuit generated job onto few, well-filled diagram sheets', () => {
     const job = generateJob(200);
     const diagram = layoutReport(job, analyse(job)).filter((s) => s.kind === 'diagram');
