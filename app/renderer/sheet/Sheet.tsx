@@ -3,14 +3,14 @@
 import { useCallback, useEffect, useMemo, useRef, type DragEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
   Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, useReactFlow,
-  type Connection, type EdgeChange, type NodeChange,
+  type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
 } from '@xyflow/react';
 import { defaultLinkFor, type NodeKind } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
 import { nextId } from '../store/ids.js';
 import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
-import { toFlowEdge, toFlowNode } from './flow.js';
+import { flowList, toFlowEdge, toFlowNode } from './flow.js';
 import { setSheetHandle } from './handle.js';
 import { newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView } from './view.js';
@@ -19,6 +19,11 @@ import { useUi } from '../app/ui.js';
 export const PART_MIME = 'application/x-loopwright-part';
 /** Above this many nodes only what is in view is drawn, and the view jumps rather than glides. */
 export const LARGE = 1000;
+
+// Props given to React Flow that never change: new ones on every render would re-render every
+// drawn node and link wrapper (a drag frame re-renders the sheet).
+const MULTI_SELECTION_KEYS = ['Meta', 'Control'];
+const PRO_OPTIONS = { hideAttribution: true };
 
 function linkPrefix(job: ReturnType<typeof useEditor.getState>['job'], from: string, to: string): string {
   const a = job.nodes.find((n) => n.id === from);
@@ -54,14 +59,11 @@ export function Sheet({ onContextMenu }: SheetProps) {
   const cursor = useRef<{ x: number; y: number } | null>(null);
   const wrapper = useRef<HTMLDivElement>(null);
 
-  const nodes = useMemo(() => {
-    const sel = new Set(selection.nodes);
-    return jobNodes.map((n) => toFlowNode(n, sel.has(n.id)));
-  }, [jobNodes, selection.nodes]);
-  const edges = useMemo(() => {
-    const sel = new Set(selection.links);
-    return jobLinks.map((l) => toFlowEdge(l, sel.has(l.id)));
-  }, [jobLinks, selection.links]);
+  // Incremental: a drag frame replaces only the moved nodes; the links' array stays the same one.
+  const nodeList = useMemo(() => flowList<(typeof jobNodes)[number], Node>(toFlowNode), []);
+  const edgeList = useMemo(() => flowList<(typeof jobLinks)[number], Edge>(toFlowEdge), []);
+  const nodes = nodeList(jobNodes, selection.nodes);
+  const edges = edgeList(jobLinks, selection.links);
 
   const centre = useCallback(
     (ids: string[]) => {
@@ -207,6 +209,15 @@ export function Sheet({ onContextMenu }: SheetProps) {
     onContextMenu({ x: e.clientX, y: e.clientY });
   }, [flow, onContextMenu]);
 
+  const onNodeContextMenu = useCallback((e: ReactMouseEvent, n: Node) => {
+    if (!useEditor.getState().selection.nodes.includes(n.id)) useEditor.getState().select({ nodes: [n.id], links: [] });
+    contextMenu(e);
+  }, [contextMenu]);
+  const onEdgeContextMenu = useCallback((e: ReactMouseEvent, ed: Edge) => {
+    if (!useEditor.getState().selection.links.includes(ed.id)) useEditor.getState().select({ nodes: [], links: [ed.id] });
+    contextMenu(e);
+  }, [contextMenu]);
+
   // Above this size only what is in view is drawn (every link still has its result in the schedule).
   const large = jobNodes.length > LARGE;
   return (
@@ -220,23 +231,17 @@ export function Sheet({ onContextMenu }: SheetProps) {
         onEdgesChange={onEdgesChange}
         onConnect={onConnect}
         onPaneContextMenu={contextMenu}
-        onNodeContextMenu={(e, n) => {
-          if (!useEditor.getState().selection.nodes.includes(n.id)) useEditor.getState().select({ nodes: [n.id], links: [] });
-          contextMenu(e);
-        }}
-        onEdgeContextMenu={(e, ed) => {
-          if (!useEditor.getState().selection.links.includes(ed.id)) useEditor.getState().select({ nodes: [], links: [ed.id] });
-          contextMenu(e);
-        }}
+        onNodeContextMenu={onNodeContextMenu}
+        onEdgeContextMenu={onEdgeContextMenu}
         deleteKeyCode={null}
         selectionKeyCode="Shift"
-        multiSelectionKeyCode={['Meta', 'Control']}
+        multiSelectionKeyCode={MULTI_SELECTION_KEYS}
         connectionLineType={ConnectionLineType.Step}
         connectionRadius={28}
         onlyRenderVisibleElements={large}
         minZoom={0.05}
         maxZoom={3}
-        proOptions={{ hideAttribution: true }}
+        proOptions={PRO_OPTIONS}
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
         <Controls showInteractive={false} />
