@@ -1,6 +1,7 @@
 // Find: search nodes and links by id or name; choosing one selects it and centres it.
 import { useMemo, useState } from 'react';
 import { useEditor } from '../store/editor.js';
+import { selectSearchable, type Searchable } from '../store/selectors.js';
 import { Dialog } from './Dialog.js';
 import { useUi } from './ui.js';
 
@@ -10,7 +11,7 @@ interface Hit {
   text: string;
 }
 
-export function findHits(job: ReturnType<typeof useEditor.getState>['job'], query: string, limit = 50): Hit[] {
+export function findHits(job: Searchable, query: string, limit = 50): Hit[] {
   const q = query.trim().toLowerCase();
   if (q === '') return [];
   const hits: Hit[] = [];
@@ -38,8 +39,9 @@ export function FindDialog() {
 
 function FindBody() {
   const [query, setQuery] = useState('');
-  const job = useEditor((s) => s.job);
-  const hits = useMemo(() => findHits(job, query), [job, query]);
+  // Only what Find searches, and only while there is a query: a drag or an edit of a cable does not re-run it.
+  const searched = useEditor((s) => (query.trim() === '' ? null : selectSearchable(s)));
+  const hits = useMemo(() => (searched ? findHits(searched, query) : []), [searched, query]);
   const close = () => useUi.getState().set({ findOpen: false });
   const choose = (hit: Hit) => {
     const s = useEditor.getState();

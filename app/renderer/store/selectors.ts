@@ -112,3 +112,33 @@ export const selectDirty = (s: EditorState) => s.dirty;
 export function isSelected(s: EditorState, id: string): boolean {
   return s.selection.nodes.includes(id) || s.selection.links.includes(id);
 }
+
+/** What Find searches: every node's id, kind and name, every link's id, ends and name. */
+export interface Searchable {
+  nodes: readonly JobNode[];
+  links: readonly Link[];
+}
+
+const sameNodeText = (a: JobNode, b: JobNode) => a === b || (a.id === b.id && a.kind === b.kind && a.name === b.name);
+const sameLinkText = (a: Link, b: Link) => a === b || (a.id === b.id && a.from === b.from && a.to === b.to && a.name === b.name);
+
+function sameText<T>(a: readonly T[], b: readonly T[], same: (x: T, y: T) => boolean): boolean {
+  if (a === b) return true;
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!same(a[i]!, b[i]!)) return false;
+  return true;
+}
+
+let searchable: Searchable | null = null;
+/**
+ * The job's nodes and links as Find sees them: the same object until an id, kind, name or end
+ * changes (or something is added or removed), so a move or an edit of a cable leaves it alone.
+ */
+export const selectSearchable: Selector<Searchable> = (s) => {
+  const { nodes, links } = s.job;
+  if (searchable && searchable.nodes === nodes && searchable.links === links) return searchable;
+  if (!searchable || !sameText(searchable.nodes, nodes, sameNodeText) || !sameText(searchable.links, links, sameLinkText)) {
+    searchable = { nodes, links };
+  }
+  return searchable;
+};
