@@ -75,7 +75,7 @@ export async function saveJob(saveAs: boolean): Promise<void> {
       if (saved) finish(s.job, saved.name, saved.path);
       return;
     }
-    const picker = (window as unknown as { showSaveFilePicker?: SavePicker }).showSaveFilePicker;
+    const picker = savePicker();
     if (picker) {
       if (saveAs || !handle) {
         handle = await picker({ suggestedName: suggestedName(), types: [{ description: 'Loopwright job', accept: { 'application/json': ['.lwj'] } }] });
@@ -101,6 +101,17 @@ function finish(job: unknown, name: string, path: string | null) {
   if (s.job === job) s.markSaved({ name, path });
   else useEditor.setState({ fileName: name, filePath: path });
   s.setMessage({ kind: 'info', text: `Saved ${name}` });
+}
+
+/**
+ * The File System Access save picker, when the browser has one a person can answer. A browser
+ * driven by automation (navigator.webdriver) gets the download instead: its picker is a native
+ * dialog no test driver can see, so Save would wait for ever and nothing would be written.
+ */
+export function savePicker(): SavePicker | null {
+  const picker = (window as unknown as { showSaveFilePicker?: SavePicker }).showSaveFilePicker;
+  if (typeof picker !== 'function' || navigator.webdriver) return null;
+  return picker.bind(window);
 }
 
 export function download(text: string, name: string): void {
