@@ -101,6 +101,25 @@ describe('drawing a job from nothing', () => {
     await expect.poll(() => page.locator('[data-node-id]').count()).toBe(4);
     expect(cspErrors).toEqual([]);
   });
+
+  it('refuses a link that would close a loop, saying which node already feeds which', async () => {
+    const page = await app.newPage();
+    await newJob(page);
+    const sheet = (await page.locator('[data-sheet]').boundingBox())!;
+    for (const [fx, id] of [[0.3, 'B1'], [0.7, 'B2']] as const) {
+      await page.mouse.click(sheet.x + sheet.width * fx, sheet.y + sheet.height * 0.3, { button: 'right' });
+      await page.click('.lw-menu [data-command="insert.board"]');
+      await page.waitForSelector(`[data-node-id="${id}"]`);
+    }
+    await connect(page, 'B1', 'B2');
+    await page.waitForSelector('[data-link-id]', { state: 'attached' });
+    const [first] = Object.keys(await statuses(page));
+    await connect(page, 'B2', 'B1');
+    await expect.poll(() => page.textContent('[data-message]')).toBe(
+      `✗ Link from B2 to B1 refused: "B1" already feeds "B2" (through link ${first}), so this link would close a loop; the network must be radial (a tree from each supply)`,
+    );
+    expect(await page.locator('[data-link-id]').count()).toBe(1);
+  });
 });
 
 describe('the worst loop', () => {

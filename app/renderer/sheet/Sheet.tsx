@@ -12,6 +12,7 @@ import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
 import { flowList, toFlowEdge, toFlowNode } from './flow.js';
 import { setSheetHandle } from './handle.js';
+import { cycleReason } from './connect.js';
 import { newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView } from './view.js';
 import { useUi } from '../app/ui.js';
@@ -169,6 +170,11 @@ export function Sheet({ onContextMenu }: SheetProps) {
     if (!c.source || !c.target) return;
     if (c.source === c.target) {
       s.setMessage({ kind: 'error', text: `A link cannot run from ${c.source} back to itself` });
+      return;
+    }
+    const loop = cycleReason(s.job, c.source, c.target);
+    if (loop) {
+      s.setMessage({ kind: 'error', text: `Link from ${c.source} to ${c.target} refused: ${loop}` });
       return;
     }
     const id = nextId(s.job, linkPrefix(s.job, c.source, c.target));
