@@ -59,3 +59,21 @@ describe('adding parts from the palette', () => {
     }
   });
 });
+
+describe('the minimap', () => {
+  for (const viewport of [{ width: 1600, height: 1000 }, { width: 1280, height: 800 }]) {
+    it(`covers no node or link label of the demo's first view at ${viewport.width}x${viewport.height}`, async () => {
+      const page = await app.newPage({ viewport });
+      await page.waitForSelector('[data-node-id="S1"]');
+      await page.waitForSelector('.react-flow__minimap');
+      const covered = await page.evaluate(() => {
+        const m = document.querySelector('.react-flow__minimap')!.getBoundingClientRect();
+        return [...document.querySelectorAll('[data-node-id], [data-link-label]')].filter((e) => {
+          const r = e.getBoundingClientRect();
+          return r.width > 0 && r.x < m.right && r.right > m.x && r.y < m.bottom && r.bottom > m.y;
+        }).map((e) => e.getAttribute('data-node-id') ?? e.getAttribute('data-link-label'));
+      });
+      expect(covered).toEqual([]);
+    });
+  }
+});

@@ -251,7 +251,8 @@ export function Sheet({ onContextMenu }: SheetProps) {
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
         <Controls showInteractive={false} />
-        {!large && <MiniMap pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
+        {/* Top right: a tree drawn down from its supply leaves that corner empty, where the bottom right held its widest row. */}
+        {!large && <MiniMap position="top-right" pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
       </ReactFlow>
     </div>
   );
