@@ -35,6 +35,19 @@ describe('circuit schedule', () => {
     expect(byHook(container, 'data-unit', 'ratio').textContent).toBe('%');
   });
 
+  it('with the source unknown, shows own loop and upstream part, and a bare dash for an unchecked link', () => {
+    const { container } = render(<SchedulePanel />);
+    const loopCell = (id: string) => {
+      const row = byHook<HTMLElement>(container, 'data-schedule-row', id);
+      const col = [...container.querySelectorAll('thead th')].findIndex((th) => th.querySelector('[data-unit="loop"]'));
+      return row.querySelectorAll('td')[col]!.textContent!.trim();
+    };
+    expect(loopCell('C1')).toMatch(/^\d+\.\d{3} ↑\d+\.\d{3}$/);
+    expect(useEditor.getState().resultById.M1!.upstream).toBeNull();
+    expect(loopCell('M1')).toBe('—');
+    expect(loopCell('C4')).toBe('—');
+  });
+
   it('gives every column of numbers its unit in the head', () => {
     const { container } = render(<SchedulePanel />);
     const units = Object.fromEntries(

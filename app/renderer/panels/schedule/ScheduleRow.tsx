@@ -103,7 +103,8 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
         {known || !r ? ohmsValue(r?.zs) : (
           <>
             {ohmsValue(r.own)}
-            <span className="lwp-sub" title={`upstream loop ${ohms(r.upstream)}`}> ↑{ohmsValue(r.upstream)}</span>
+            {/* An unchecked link has no upstream part to show: a bare dash, not "— ↑—". */}
+            {r.upstream !== null && <span className="lwp-sub" title={`upstream loop ${ohms(r.upstream)}`}> ↑{ohmsValue(r.upstream)}</span>}
           </>
         )}
       </td>
