@@ -123,6 +123,28 @@ describe('drawing a job from nothing', () => {
 });
 
 describe('the worst loop', () => {
+  for (const viewport of [{ width: 1280, height: 800 }, { width: 1600, height: 1000 }]) {
+    it(`frames the whole traced path beside the breakdown drawer at ${viewport.width}x${viewport.height}`, async () => {
+      const page = await app.newPage({ viewport });
+      await page.click('[data-command="view.traceWorst"]');
+      await page.waitForSelector('[data-breakdown-box]');
+      // Every traced node and link label (the demo's: S1 → M1 → MSB → SM1 → DBW → W07 → P17).
+      const hidden = () => page.evaluate(() => {
+        const sheet = document.querySelector('[data-sheet]')!.getBoundingClientRect();
+        const drawer = document.querySelector('[data-breakdown-box]')!.getBoundingClientRect();
+        const traced = [...document.querySelectorAll('[data-node-id].is-traced, [data-link-label].is-traced')];
+        if (traced.length < 7) return [`only ${traced.length} traced`];
+        return traced.filter((e) => {
+          const r = e.getBoundingClientRect();
+          const off = r.x < sheet.x || r.y < sheet.y || r.right > sheet.right || r.bottom > sheet.bottom;
+          const under = r.x < drawer.right && r.right > drawer.x && r.y < drawer.bottom && r.bottom > drawer.y;
+          return off || under;
+        }).map((e) => e.getAttribute('data-node-id') ?? e.getAttribute('data-link-label'));
+      });
+      await expect.poll(hidden).toEqual([]);
+    });
+  }
+
   it('highlights the path on the sheet and opens its breakdown', async () => {
     const page = await app.newPage();
     await page.click('[data-command="view.traceWorst"]');

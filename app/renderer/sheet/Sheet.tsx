@@ -2,7 +2,7 @@
 // user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
 import { useCallback, useEffect, useMemo, useRef, type DragEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
-  Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, useReactFlow,
+  Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, getViewportForBounds, useReactFlow,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
 } from '@xyflow/react';
 import { defaultLinkFor, type NodeKind } from '../../../engine/index.js';
@@ -14,7 +14,7 @@ import { flowList, toFlowEdge, toFlowNode } from './flow.js';
 import { setSheetHandle } from './handle.js';
 import { cycleReason } from './connect.js';
 import { newPart } from './parts.js';
-import { FIT_PADDING, PART_VIEW_NOTE, firstView } from './view.js';
+import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
 import { useUi } from '../app/ui.js';
 
 export const PART_MIME = 'application/x-loopwright-part';
@@ -79,7 +79,18 @@ export function Sheet({ onContextMenu }: SheetProps) {
       }
       // On a large job every animation frame redraws what comes into view: jump instead.
       const duration = job.nodes.length > LARGE ? 0 : 250;
-      if (nodeIds.size > 0) void flow.fitView({ nodes: [...nodeIds].map((id) => ({ id })), maxZoom: 1.1, padding: 0.3, duration });
+      if (nodeIds.size === 0) return;
+      // A frame later the breakdown drawer this call may come with is drawn: frame the nodes in
+      // the part of the sheet it leaves uncovered.
+      requestAnimationFrame(() => {
+        const sheet = wrapper.current?.getBoundingClientRect();
+        const drawn = [...nodeIds].filter((id) => flow.getInternalNode(id));
+        if (!sheet || sheet.width <= 0 || drawn.length === 0) return;
+        const drawer = document.querySelector('[data-breakdown-box]')?.getBoundingClientRect() ?? null;
+        const width = freeWidth(sheet, drawer);
+        const view = getViewportForBounds(flow.getNodesBounds(drawn), width, sheet.height, 0.05, 1.1, 0.3);
+        void flow.setViewport(view, { duration });
+      });
     },
     [flow],
   );

@@ -79,3 +79,20 @@ export function firstView(nodes: readonly JobNode[], box: { width: number; heigh
 
 /** What the status bar says when the first view shows only part of the job. */
 export const PART_VIEW_NOTE = 'part of the job is out of view; Fit (Shift+1) shows all of it';
+
+/** The smallest width worth framing into beside the breakdown drawer; below it the whole sheet is used. */
+export const MIN_FREE_WIDTH = 240;
+
+/**
+ * The width of the sheet, from its left edge, that the loop breakdown drawer leaves uncovered, so
+ * a traced path or a centred circuit is framed where it can be seen. `drawer` is the drawer's box
+ * on screen (null when it is closed); a folded drawer (a short strip) covers nothing that matters.
+ */
+export function freeWidth(
+  sheet: { left: number; width: number; top: number; height: number },
+  drawer: { left: number; width: number; top: number; height: number } | null,
+): number {
+  if (!drawer || drawer.width <= 0 || drawer.height < sheet.height / 3) return sheet.width;
+  const free = drawer.left - sheet.left - 8;
+  return free >= MIN_FREE_WIDTH ? Math.min(free, sheet.width) : sheet.width;
+}
