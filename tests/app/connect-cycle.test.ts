@@ -1,7 +1,7 @@
 // The radial rule while drawing: a link that would close a loop is refused with a reason in the
 // drawing's own terms (which node already feeds which, through which links).
 import { describe, expect, it } from 'vitest';
-import type { Job } from '../../engine/index.js';
+import { loadJob, type Job } from '../../engine/index.js';
 import { cycleReason } from '../../app/renderer/sheet/connect.js';
 import { smallJob } from './fixture.js';
 
@@ -27,8 +27,11 @@ describe('cycleReason', () => {
     expect(cycleReason(looseChain(), 'B3', 'B1')).toContain('(through links SM1, SM2)');
   });
 
-  it('finds a loop back to the supply', () => {
-    expect(cycleReason(smallJob(), 'P1', 'S1')).toContain('"S1" already feeds "P1" (through links M1, C1)');
+  it('leaves a link into a supply to the plainer rule (a supply is fed by no link)', () => {
+    expect(cycleReason(smallJob(), 'P1', 'S1')).toBeNull();
+    const refused = loadJob({ ...smallJob(), links: [...smallJob().links, { id: 'X1', from: 'P1', to: 'S1', cable: { length: 1, material: 'Cu', active: 2.5, earth: 2.5 } }] });
+    expect(refused.ok).toBe(false);
+    if (!refused.ok) expect(refused.problems.map((p) => p.message).join(' ')).toMatch(/a supply is where the network starts and is fed by no link/);
   });
 
   it('says nothing for a link that keeps the network radial, or for a second feeder', () => {

@@ -7,6 +7,8 @@ import type { Job } from '../../../engine/index.js';
  * a loop: the reason, naming the links it would loop through. Null otherwise.
  */
 export function cycleReason(job: Job, from: string, to: string): string | null {
+  // A link into a supply is refused for that plainer reason (the engine's own message).
+  if (job.nodes.find((n) => n.id === to)?.kind === 'supply') return null;
   const feeder = new Map<string, { id: string; from: string }>();
   for (const l of job.links) if (!feeder.has(l.to)) feeder.set(l.to, { id: l.id, from: l.from });
   const chain: string[] = [];
