@@ -183,3 +183,13 @@ describe('ids', () => {
     expect(nextId(s().job, 'M')).toBe('M2');
   });
 });
+
+describe('undo and redo with nothing left', () => {
+  it('say so instead of leaving the last message standing', () => {
+    useEditor.getState().loadJob(smallJob(), { name: 'x.lwj' });
+    useEditor.getState().redo();
+    expect(useEditor.getState().message?.text).toBe('Nothing to redo');
+    useEditor.getState().undo();
+    expect(useEditor.getState().message?.text).toBe('Nothing to undo');
+  });
+});

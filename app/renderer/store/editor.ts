@@ -176,7 +176,10 @@ export const useEditor = create<EditorState>()((set, get) => {
 
     undo() {
       const step = past.pop();
-      if (!step) return;
+      if (!step) {
+        set({ message: { kind: 'info', text: 'Nothing to undo' } });
+        return;
+      }
       gestureBase = null;
       future.push({ job: get().job, label: step.label });
       become(step.job, true, { message: { kind: 'info', text: `Undid ${step.label}` } });
@@ -184,7 +187,10 @@ export const useEditor = create<EditorState>()((set, get) => {
 
     redo() {
       const step = future.pop();
-      if (!step) return;
+      if (!step) {
+        set({ message: { kind: 'info', text: 'Nothing to redo' } });
+        return;
+      }
       gestureBase = null;
       past.push({ job: get().job, label: step.label });
       become(step.job, true, { message: { kind: 'info', text: `Redid ${step.label}` } });
