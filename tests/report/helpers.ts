@@ -4,7 +4,8 @@ import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { parseJob, type Job } from '../../engine/index.js';
-import { textWidth, type Sheet, type TextItem } from '../../engine/report/index.js';
+import { expect } from 'vitest';
+import { MIN_TEXT_MM, textWidth, type Sheet, type TextItem } from '../../engine/report/index.js';
 
 export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
@@ -49,4 +50,17 @@ export function tool(cmd: string, args: string[]): { status: number | null; stdo
   const r = spawnSync(cmd, args, { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
   if (r.error !== undefined) throw r.error;
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+/** Every text of a sheet at 2 mm or more, inside the 10 mm frame, and no two texts overlapping. */
+export function expectReadable(sheet: Sheet): void {
+  for (const t of texts(sheet)) {
+    expect(t.size).toBeGreaterThanOrEqual(MIN_TEXT_MM);
+    const b = textBox(t);
+    expect(b.x0).toBeGreaterThanOrEqual(9.9);
+    expect(b.x1).toBeLessThanOrEqual(sheet.widthMm - 9.9);
+    expect(b.y0).toBeGreaterThanOrEqual(9.9);
+    expect(b.y1).toBeLessThanOrEqual(sheet.heightMm - 9.9);
+  }
+  expect(overlappingTexts(sheet), sheet.title).toEqual([]);
 }
