@@ -2,7 +2,7 @@
 // from the supply to the circuit's far end, each with its ohms and its share of the limit.
 
 import type { Job } from '../model/types.js';
-import { add, magnitude, sum, type Complex } from './complex.js';
+import { magnitude, sum, type Complex } from './complex.js';
 import { resolveRules } from './basis.js';
 import { checkLink } from './check.js';
 import { LoopSums } from './loop.js';
@@ -70,7 +70,7 @@ export function loopBreakdown(job: Job, linkId: string): Breakdown | null {
     link: linkId,
     method: result.method,
     limit,
-    total: magnitude(parts.reduce(add, sum([]))),
+    total: magnitude(sum(parts)),
     own: result.own,
     upstream: result.upstream,
     ratio: result.ratio,

@@ -8,7 +8,7 @@
 
 import type { Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
-import { add, magnitude } from './complex.js';
+import { add, magnitude, sub } from './complex.js';
 import { clearingTime, deviceMark, tripCurrent } from './devices.js';
 import { impedancePerMetre } from './impedance.js';
 import { loopParts, type LoopSums } from './loop.js';
@@ -99,7 +99,7 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
       const upRatio = upLimit > 0 ? result.upstream / upLimit : result.upstream > 0 ? Number.MAX_VALUE : 0;
       result.limit = ownLimit;
       result.ratio = Math.max(ownRatio, upRatio);
-      const beforeOwn = { re: parts.beforeLink.re - parts.upstream.re, im: parts.beforeLink.im - parts.upstream.im };
+      const beforeOwn = sub(parts.beforeLink, parts.upstream);
       result.maxLength = maxLength(beforeOwn, perMetre, ownLimit);
       status = result.ratio <= 1 ? 'pass' : 'fail';
       if (ownRatio > 1) notes.push(`the circuit's own loop ${ohms(result.own)} exceeds ${pct(share)} of the loop budget (${ohms(ownLimit)})`);

@@ -2,7 +2,7 @@
 // parts of a circuit's loop the check needs.
 
 import type { Link } from '../model/types.js';
-import { add, magnitude, sub, ZERO, type Complex } from './complex.js';
+import { add, sub, ZERO, type Complex } from './complex.js';
 import type { ResolvedRules } from './basis.js';
 import { linkImpedance } from './impedance.js';
 import type { Network } from './network.js';
@@ -85,4 +85,3 @@ export function loopParts(sums: LoopSums, link: Link, origin: string | null): Lo
   return { drawn, upstream, own: sub(drawn, upstream), beforeLink };
 }
 
-export { magnitude };
