@@ -14,14 +14,29 @@ export function analyse(job: Job): Results {
   const net = new Network(job);
   const sums = new LoopSums(net, rules);
   const circuits = job.links.map((link) => checkLink(sums, link));
-  const summary: Summary = { pass: 0, fail: 0, rcd: 0, unchecked: 0 };
-  for (const c of circuits) summary[c.status] += 1;
+  const counts = () => ({ pass: 0, fail: 0, rcd: 0, unchecked: 0 });
+  const checkCounts = () => ({ pass: 0, fail: 0, unchecked: 0 });
+  const summary: Summary = {
+    ...counts(),
+    verdict: counts(),
+    checks: { voltage: checkCounts(), capacity: checkCounts(), breaking: checkCounts(), withstand: checkCounts(), measured: counts() },
+  };
+  for (const c of circuits) {
+    summary[c.status] += 1;
+    summary.verdict[c.verdict] += 1;
+    summary.checks.voltage[c.voltageStatus] += 1;
+    summary.checks.capacity[c.capacityStatus] += 1;
+    summary.checks.breaking[c.breakingStatus] += 1;
+    summary.checks.withstand[c.withstandStatus] += 1;
+    if (c.measured) summary.checks.measured[c.measured.status] += 1;
+  }
   return {
     format: 'loopwright.results',
-    version: 1,
+    version: 2,
     basis: rules.basis,
     circuits,
     worst: worstPath(net, job.links, circuits),
+    supplies: [],
     summary,
   };
 }

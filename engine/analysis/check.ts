@@ -46,6 +46,23 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
     maxLength: null,
     status: 'unchecked',
     notes,
+    phases: 1,
+    designCurrent: null,
+    powerFactor: null,
+    voltageDrop: null,
+    voltageDropTotal: null,
+    voltageDropLimit: null,
+    voltageStatus: 'unchecked',
+    capacity: null,
+    capacityStatus: 'unchecked',
+    faultLevel: null,
+    breakingStatus: 'unchecked',
+    earthMinArea: null,
+    withstandStatus: 'unchecked',
+    testLimit: null,
+    measured: null,
+    fixes: [],
+    verdict: 'unchecked',
   };
 
   const parts = loopParts(sums, link, protecting?.from ?? null);

@@ -1,6 +1,7 @@
 // The migration chain. Each step lifts a file object from one format version to the next.
-// Version 1 is the first published version, so the chain is empty today; loading still goes
-// through it, so the first real migration only has to be added here (with before/after fixtures).
+// Version 2 adds only optional fields (loads, fault levels, readings; method-depth.md), so a
+// version 1 file becomes version 2 by changing its version alone
+// (tests/fixtures/v1-to-v2.before.lwj and .after.lwj).
 
 import type { Json } from './fields.js';
 
@@ -12,7 +13,14 @@ export interface Migration {
   up(file: Json): Json;
 }
 
-export const MIGRATIONS: readonly Migration[] = [];
+export const MIGRATIONS: readonly Migration[] = [
+  {
+    from: 1,
+    to: 2,
+    summary: 'version 2 adds optional fields only (loads, voltage drop, capacity, fault levels, readings); nothing else changes',
+    up: (file) => file,
+  },
+];
 
 export type MigrationOutcome =
   | { ok: true; file: Json; migratedFrom: number | null; steps: string[] }

@@ -1,4 +1,5 @@
-// The job: one installation design, as saved in a `.lwj` file (format version 1).
+// The job: one installation design, as saved in a `.lwj` file (format version 2; version 1 files
+// are migrated on load).
 // Field names and units follow the public job format; see engine/model/FORMAT.md.
 
 export type Material = 'Cu' | 'Al';
@@ -31,7 +32,23 @@ export interface Rules {
   resistivity?: Partial<Record<Material, number>>;
   /** Instantaneous trip multiples of In for breaker curves. */
   multiples?: Partial<Record<Curve, number>>;
+  /** Voltage-drop limit at every point, % of U0 (overrides the basis). */
+  voltageDropLimit?: number;
+  /** Resistivity in normal service for the voltage drop, Ω·mm²/m. */
+  voltageDropResistivity?: Partial<Record<Material, number>>;
+  /** cmax, the voltage factor for maximum fault currents. */
+  maxVoltageFactor?: number;
+  /** Resistivity at 20 °C for fault levels, Ω·mm²/m. */
+  shortCircuitResistivity?: Partial<Record<Material, number>>;
+  /** How a measured loop impedance is corrected: by temperature (default) or a fixed factor. */
+  measuredRule?: MeasuredRule;
+  /** The fixed factor: a reading must not exceed this share of the limit (default 0.8). */
+  measuredFactor?: number;
 }
+
+export type MeasuredRule = 'temperature' | 'fixed-factor';
+export type Phases = 1 | 3;
+export type Insulation = 'pvc' | 'xlpe';
 
 export type Source =
   | { type: 'unknown' }
@@ -50,9 +67,26 @@ interface NodeBase {
   at?: Position;
 }
 
+export interface MaxFault {
+  /** The distributor's maximum prospective short-circuit current at the supply, A. */
+  current: number;
+  /** X/R (default 1). */
+  xr?: number;
+}
+
+export interface SupplyReading {
+  /** Measured Ze, Ω. */
+  ze: number;
+  date?: string;
+  instrument?: string;
+}
+
 export interface SupplyNode extends NodeBase {
   kind: 'supply';
   source: Source;
+  phases?: Phases;
+  maxFault?: MaxFault;
+  measured?: SupplyReading;
 }
 
 export interface BoardNode extends NodeBase {
@@ -65,7 +99,7 @@ export interface PointNode extends NodeBase {
   use: PointUse;
   handHeld?: boolean;
   current?: number;
-  phases?: 1 | 3;
+  phases?: Phases;
   powerFactor?: number;
 }
 
@@ -80,11 +114,21 @@ export interface Cable {
   earthMaterial?: Material;
   parallel?: number;
   reactance?: number;
+  insulation?: Insulation;
+  /** The earth is a core of the cable (default true) rather than a separate conductor. */
+  earthInCable?: boolean;
+  /** Iz of all parallel sets together, A, as installed (after derating). */
+  capacity?: number;
+  /** Grouping and ambient factors multiplied together (0 < f ≤ 1). */
+  derating?: number;
 }
 
 interface DeviceBase {
   rating: number;
+  /** Breaking capacity, kA. */
   breaking?: number;
+  /** Published let-through energy I²t, A²s. */
+  letThrough?: number;
   label?: string;
 }
 
@@ -127,11 +171,27 @@ export interface Link {
   device?: Device;
   rcd?: Rcd;
   requiredTime?: number;
+  phases?: Phases;
+  /** A maximum demand assessed some other way, A. */
+  designCurrent?: number;
+  powerFactor?: number;
+  /** %, overrides the rules for this link. */
+  voltageDropLimit?: number;
+  measured?: LinkReading;
+}
+
+export interface LinkReading {
+  /** Measured Zs at the far end, Ω. */
+  zs: number;
+  /** Conductor temperature at the test, °C (default 20). */
+  temperature?: number;
+  date?: string;
+  instrument?: string;
 }
 
 export interface Job {
   format: 'loopwright.job';
-  version: 1;
+  version: 2;
   job: JobDetails;
   rules: Rules;
   nodes: JobNode[];
@@ -140,5 +200,5 @@ export interface Job {
   extra?: Record<string, unknown>;
 }
 
-export const CURRENT_VERSION = 1;
+export const CURRENT_VERSION = 2;
 export const FORMAT_NAME = 'loopwright.job';

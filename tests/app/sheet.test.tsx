@@ -69,7 +69,11 @@ describe('label text', () => {
   it('formats cable, known-source and unknown-source results, and every status', () => {
     expect(cableLine({ id: 'C1', from: 'A', to: 'B', cable: { length: 32, material: 'Cu', active: 2.5, earth: 2.5 } })).toBe('2.5/2.5 Cu, 32 m');
     const base = { link: 'C1', name: null, from: 'A', to: 'B', role: 'final-subcircuit' as const, protectedBy: 'C1', device: 'C20', tripCurrent: 150,
-      requiredTime: 0.4, upstream: 0.1, faultCurrent: null, clearingTime: null, maxLength: 60, status: 'pass' as const, notes: [] };
+      requiredTime: 0.4, upstream: 0.1, faultCurrent: null, clearingTime: null, maxLength: 60, status: 'pass' as const, notes: [],
+      phases: 1 as const, designCurrent: null, powerFactor: null, voltageDrop: null, voltageDropTotal: null, voltageDropLimit: null,
+      voltageStatus: 'unchecked' as const, capacity: null, capacityStatus: 'unchecked' as const, faultLevel: null,
+      breakingStatus: 'unchecked' as const, earthMinArea: null, withstandStatus: 'unchecked' as const, testLimit: null,
+      measured: null, fixes: [], verdict: 'pass' as const };
     expect(resultLine({ ...base, method: 'known-source', zs: 0.8412, own: 0.6, limit: 1.5333, ratio: 0.5486 })).toBe('Zs 0.84 / 1.53 Ω, 55 %');
     expect(resultLine({ ...base, method: 'unknown-source', zs: null, own: 0.576, limit: 1.2267, ratio: 0.4696 })).toBe('own 0.58 / 1.23 Ω, 47 %');
     expect(statusText('pass')).toBe('✓ pass');

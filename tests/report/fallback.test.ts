@@ -32,7 +32,7 @@ function branchyJob(): Job {
     parent = `Y${i}`;
   }
   return {
-    format: 'loopwright.job', version: 1,
+    format: 'loopwright.job', version: 2,
     job: { title: 'Tiled fallback test job', site: 'Invented', client: 'Test', designer: 'Test', reference: 'T-1', revision: 'A', date: '2026-01-15', notes: '' },
     rules: { basis: 'au-nz' }, nodes, links,
   };

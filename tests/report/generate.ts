@@ -47,7 +47,7 @@ export function generatedJob(options: { drawn?: boolean; unknownSource?: boolean
     });
   }
   return {
-    format: 'loopwright.job', version: 1,
+    format: 'loopwright.job', version: 2,
     job: { title: 'Generated test job, 201 links', site: 'Invented site', client: 'Test', designer: 'Test', reference: 'GEN-200', revision: 'B', date: '2026-01-15', notes: '' },
     rules: { basis: 'au-nz' }, nodes, links,
   };

@@ -62,16 +62,34 @@ export function describe(p: Problem): string {
 
 export const EMPTY_RESULTS: Results = {
   format: 'loopwright.results',
-  version: 1,
+  version: 2,
   basis: 'au-nz',
   circuits: [],
   worst: null,
-  summary: { pass: 0, fail: 0, rcd: 0, unchecked: 0 },
+  supplies: [],
+  summary: {
+    pass: 0,
+    fail: 0,
+    rcd: 0,
+    unchecked: 0,
+    verdict: { pass: 0, fail: 0, rcd: 0, unchecked: 0 },
+    checks: {
+      voltage: { pass: 0, fail: 0, unchecked: 0 },
+      capacity: { pass: 0, fail: 0, unchecked: 0 },
+      breaking: { pass: 0, fail: 0, unchecked: 0 },
+      withstand: { pass: 0, fail: 0, unchecked: 0 },
+      measured: { pass: 0, fail: 0, rcd: 0, unchecked: 0 },
+    },
+  },
 };
 
 function sameResult(a: CircuitResult, b: CircuitResult): boolean {
   for (const key of Object.keys(a) as Array<keyof CircuitResult>) {
     if (key === 'notes') continue;
+    if (key === 'measured' || key === 'fixes') {
+      if (JSON.stringify(a[key]) !== JSON.stringify(b[key])) return false;
+      continue;
+    }
     if (a[key] !== b[key]) return false;
   }
   return a.notes.length === b.notes.length && a.notes.every((n, i) => n === b.notes[i]);
