@@ -20,3 +20,6 @@ export { deviceMark } from './analysis/devices.js';
 export { CAUTION } from './caution.js';
 export type { ReportOptions, Sheet } from './report/index.js';
 export { layoutReport, sheetToSvg, scheduleCsv } from './report/index.js';
+export { CAPACITY_TABLE_SOURCE, CAPACITY_ROWS } from './analysis/capacity-table.js';
+export { K_TABLE, K_TABLE_SOURCE, kFactor } from './analysis/k-table.js';
+export { MEASURED_SOURCE } from './analysis/basis.js';
