@@ -58,7 +58,7 @@ describe('drawing a job from nothing', () => {
 
     // The radial rule while drawing: a second feeder into P1 is refused, with the reason.
     await connect(page, 'S1', 'P1');
-    await expect.poll(() => page.textContent('[data-message]')).toMatch(/refused.*P1.*already fed by link "C1"/);
+    await expect.poll(() => page.textContent('[data-message]')).toMatch(/refused.*P1.*already fed by link C1 from B1/);
     expect(await page.locator('[data-link-id]').count()).toBe(3);
 
     // Lengths and devices typed into the details panel.

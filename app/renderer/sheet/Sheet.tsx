@@ -5,14 +5,13 @@ import {
   Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, getViewportForBounds, useReactFlow,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
 } from '@xyflow/react';
-import { defaultLinkFor, type NodeKind } from '../../../engine/index.js';
+import type { NodeKind } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
-import { nextId } from '../store/ids.js';
+import { connectParts } from '../commands/wiring.js';
 import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
 import { flowList, toFlowEdge, toFlowNode } from './flow.js';
 import { setSheetHandle } from './handle.js';
-import { cycleReason } from './connect.js';
 import { newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
 import { useUi } from '../app/ui.js';
@@ -26,12 +25,31 @@ export const LARGE = 1000;
 const MULTI_SELECTION_KEYS = ['Meta', 'Control'];
 const PRO_OPTIONS = { hideAttribution: true };
 
-function linkPrefix(job: ReturnType<typeof useEditor.getState>['job'], from: string, to: string): string {
-  const a = job.nodes.find((n) => n.id === from);
-  const b = job.nodes.find((n) => n.id === to);
-  if (b?.kind === 'point') return 'C';
-  if (a?.kind === 'supply') return 'M';
-  return 'SM';
+/** The part whose body is under a screen point, if any (a cable dropped there connects to it). */
+export function partAt(x: number, y: number): string | null {
+  if (typeof document.elementsFromPoint !== 'function') return null;
+  for (const el of document.elementsFromPoint(x, y)) {
+    const node = el.closest?.('.react-flow__node[data-id]');
+    if (node) return node.getAttribute('data-id');
+  }
+  return null;
+}
+
+/**
+ * A cable released without snapping to a dot: on a part's body it connects (from the part it was
+ * drawn from, whichever dot it started at); anywhere else the status bar says how to connect.
+ */
+export function connectOnRelease(state: { isValid: boolean | null; fromNode: { id: string } | null; fromHandle: { type: string } | null }, at: { x: number; y: number }): void {
+  if (state.isValid || !state.fromNode || !state.fromHandle) return;
+  const onto = partAt(at.x, at.y);
+  const start = state.fromNode.id;
+  if (!onto || onto === start) {
+    if (!onto) useEditor.getState().setMessage({ kind: 'info', text: `Not connected: release the cable from ${start} on a part to connect it` });
+    return;
+  }
+  // From an output dot the cable feeds the part it is dropped on; from an input dot, the other way.
+  if (state.fromHandle.type === 'source') connectParts(start, onto);
+  else connectParts(onto, start);
 }
 
 // Positions dragged since the last frame, keyed by node id.
@@ -177,22 +195,13 @@ export function Sheet({ onContextMenu }: SheetProps) {
   }, []);
 
   const onConnect = useCallback((c: Connection) => {
-    const s = useEditor.getState();
     if (!c.source || !c.target) return;
-    if (c.source === c.target) {
-      s.setMessage({ kind: 'error', text: `A link cannot run from ${c.source} back to itself` });
-      return;
-    }
-    const loop = cycleReason(s.job, c.source, c.target);
-    if (loop) {
-      s.setMessage({ kind: 'error', text: `Link from ${c.source} to ${c.target} refused: ${loop}` });
-      return;
-    }
-    const id = nextId(s.job, linkPrefix(s.job, c.source, c.target));
-    const link = defaultLinkFor(s.job, c.source, c.target, id);
-    const outcome = s.apply({ op: 'add-link', link }, `link ${c.source} → ${c.target}`);
-    if (outcome.ok) s.select({ nodes: [], links: [id] });
-    else s.setMessage({ kind: 'error', text: `Link from ${c.source} to ${c.target} refused: ${outcome.reason}` });
+    connectParts(c.source, c.target);
+  }, []);
+
+  const onConnectEnd = useCallback((e: MouseEvent | TouchEvent, state: Parameters<typeof connectOnRelease>[0]) => {
+    const point = 'changedTouches' in e ? e.changedTouches[0] : e;
+    if (point) connectOnRelease(state, { x: point.clientX, y: point.clientY });
   }, []);
 
   const onMouseMove = useCallback((e: ReactMouseEvent) => {
@@ -247,6 +256,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
         onNodesChange={onNodesChange}
         onEdgesChange={onEdgesChange}
         onConnect={onConnect}
+        onConnectEnd={onConnectEnd}
         onPaneContextMenu={contextMenu}
         onNodeContextMenu={onNodeContextMenu}
         onEdgeContextMenu={onEdgeContextMenu}

@@ -16,10 +16,10 @@ const edgeCache = new WeakMap<Link, { selected: boolean; edge: Edge }>();
 
 function handles(kind: JobNode['kind']): NodeHandle[] {
   const { width, height } = NODE_SIZE[kind];
-  return [
-    { id: null, type: 'target', position: Position.Top, x: width / 2 - HANDLE / 2, y: -HANDLE / 2, width: HANDLE, height: HANDLE },
-    { id: null, type: 'source', position: Position.Bottom, x: width / 2 - HANDLE / 2, y: height - HANDLE / 2, width: HANDLE, height: HANDLE },
-  ];
+  const out: NodeHandle = { id: null, type: 'source', position: Position.Bottom, x: width / 2 - HANDLE / 2, y: height - HANDLE / 2, width: HANDLE, height: HANDLE };
+  // A supply is where the network starts: no input dot.
+  if (kind === 'supply') return [out];
+  return [{ id: null, type: 'target', position: Position.Top, x: width / 2 - HANDLE / 2, y: -HANDLE / 2, width: HANDLE, height: HANDLE }, out];
 }
 
 export function toFlowNode(n: JobNode, selected: boolean): Node {

@@ -22,7 +22,6 @@ function SupplyNodeView({ id, selected }: NodeProps) {
   return (
     <div className={classes('supply', selected, traced)} data-node-id={id} data-kind="supply" style={NODE_SIZE.supply}
       title={`${id}: ${node.name ?? 'supply'}`}>
-      <Handle type="target" position={Position.Top} className="lw-handle lw-handle--in lw-handle--refuse" />
       <svg className="lw-symbol" viewBox="0 0 32 32" aria-hidden="true">
         <circle cx="16" cy="16" r="13" />
         <path d="M8 16 q4 -7 8 0 t8 0" />

@@ -8,6 +8,7 @@ import { NumberField, Readout, SelectField, TextField } from '../fields/fields.j
 import { ROLE_LONG, num } from '../format.js';
 import { CircuitResults } from './CircuitResults.js';
 import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
+import { FeedPicker } from '../../app/FeedPicker.js';
 
 const MATERIALS: ReadonlyArray<{ value: Material; label: string }> = [
   { value: 'Cu', label: 'copper (Cu)' },
@@ -70,9 +71,7 @@ export function LinkDetails({ link }: { link: Link }) {
         <fieldset className="lwp-group" data-group="identity">
           <legend>Link</legend>
           <TextField field="id" label="Id" value={id} emptyAs="empty" onCommit={(v) => editLink(id, 'id', v ?? '', `rename ${id}`)} />
-          <Readout label="From → to">
-            {link.from}{fromName ? ` (${fromName})` : ''} → {link.to}{toName ? ` (${toName})` : ''}
-          </Readout>
+          <FeedPicker link={link} />
           <Readout label="Role">{role || '—'}</Readout>
           <TextField field="name" label="Name" value={link.name} onCommit={set('name')} />
           <TextField field="notes" label="Notes" value={link.notes} multiline onCommit={set('notes')} />
