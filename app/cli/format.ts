@@ -73,3 +73,46 @@ export function summaryLine(summary: Record<Status, number>): string {
 export function clip(text: string, width: number): string {
   return text.length <= width ? text : `${text.slice(0, width - 1)}…`;
 }
+
+/** A percentage of U0 (a voltage drop): two decimals below 10 %, one above. */
+export function dropPercent(value: number | null): string {
+  if (value === null) return DASH;
+  return fixed(value, Math.abs(value) >= 10 ? 1 : 2);
+}
+
+/** A prospective fault current in kA: two decimals below 10 kA, one above. */
+export function kiloamps(value: number | null): string {
+  if (value === null) return DASH;
+  const ka = value / 1000;
+  return fixed(ka, Math.abs(ka) >= 10 ? 1 : 2);
+}
+
+/** A computed cross-section (mm²), two decimals. */
+export function area(value: number | null): string {
+  if (value === null) return DASH;
+  return fixed(value, 2);
+}
+
+/** A power factor, two decimals. */
+export function powerFactor(value: number | null): string {
+  if (value === null) return DASH;
+  return fixed(value, 2);
+}
+
+/** The symbol shown before a status word, so a status never rests on one cue alone. */
+export const STATUS_MARK: Record<Status, string> = {
+  pass: '✓',
+  fail: '✗',
+  rcd: '!',
+  unchecked: '–',
+};
+
+/** Symbol and word: `✓ pass`, `✗ FAIL`, `! RCD-reliant`, `– unchecked`. */
+export function marked(status: Status): string {
+  return `${STATUS_MARK[status]} ${STATUS_WORD[status]}`;
+}
+
+/** Counts of a check with no RCD case: `3 pass, 1 fail, 2 unchecked`. */
+export function checkCountsLine(counts: { pass: number; fail: number; unchecked: number }): string {
+  return `${counts.pass} pass, ${counts.fail} fail, ${counts.unchecked} unchecked`;
+}

@@ -1,9 +1,11 @@
-// The readable output of `check`: an aligned table of every link, the notes, the worst fault
-// path, the summary and the caution. It only arranges what analyse(job) computed.
+// The readable output of `check`: an aligned table of every link (the loop, or with --checks the
+// other checks), the notes, the supplies' fault level and headroom, the worst fault path, the
+// summary of every check and the caution. It only arranges what analyse(job) computed.
 
-import { CAUTION, type CircuitResult, type Job, type Link, type Results } from '../../engine/index.js';
-import { ROLE_SHORT } from '../../engine/report/format.js';
-import { amps, cableMark, clip, metres, ohms, percent, seconds, STATUS_WORD, summaryLine } from './format.js';
+import { CAUTION, resolveRules, type CircuitResult, type Job, type Link, type Results } from '../../engine/index.js';
+import { ROLE_SHORT } from '../../engine/report/index.js';
+import { CHECK_COLUMNS, checkRows, fixLines, summaryLines, supplyLines } from './checks.js';
+import { amps, cableMark, clip, metres, ohms, percent, seconds, STATUS_WORD } from './format.js';
 
 type Align = 'left' | 'right';
 
@@ -90,15 +92,19 @@ export function worstLine(results: Results): string {
   return `Worst fault path: ${worst.path.join(' → ')} (ratio ${percent(worst.ratio)} %)`;
 }
 
+/** Which table `check` prints: the loop (default) or the other checks (`--checks`). */
+export type CheckView = 'loop' | 'checks';
+
 /** The whole readable output of `check`, ending with a newline. */
-export function renderCheck(job: Job, results: Results): string {
+export function renderCheck(job: Job, results: Results, view: CheckView = 'loop'): string {
   const byId = new Map(job.links.map((l) => [l.id, l] as const));
   const rows: Row[] = results.circuits.map((result) => ({
     result,
     link: byId.get(result.link),
     protecting: result.protectedBy !== null ? byId.get(result.protectedBy) : undefined,
   }));
-  const lines = [...heading(job, results), '', ...alignTable(columnsFor(results), rows)];
+  const table = view === 'checks' ? alignTable(CHECK_COLUMNS, checkRows(results)) : alignTable(columnsFor(results), rows);
+  const lines = [...heading(job, results), '', ...table];
 
   const noted = results.circuits.filter((c) => c.notes.length > 0);
   if (noted.length > 0) {
@@ -107,6 +113,10 @@ export function renderCheck(job: Job, results: Results): string {
       for (const note of c.notes) lines.push(`  ${c.link}: ${note}`);
     }
   }
-  lines.push('', worstLine(results), summaryLine(results.summary), '', `Caution: ${CAUTION}`);
+  if (view === 'checks') lines.push(...fixLines(results));
+  lines.push(...supplyLines(job, results, resolveRules(job.rules).voltage.value));
+  lines.push('', worstLine(results), ...summaryLines(results));
+  if (view === 'loop') lines.push('Drop, capacity, fault level, withstand, test limit, readings, verdict and fixes per link: check --checks.');
+  lines.push('', `Caution: ${CAUTION}`);
   return `${lines.join('\n')}\n`;
 }

@@ -1,9 +1,11 @@
 // scheduleCsv: the circuit schedule for spreadsheets. One header row with the units in the
 // names, one row per link in file order, RFC 4180 quoting and CRLF line ends. Numbers are
-// rounded to 6 significant figures (no float noise); empty cells where a value is null.
+// rounded to 6 significant figures (no float noise); empty cells where a value is null. The
+// fixes are in words (`shorten to 45.2 m or less; cable 4/2.5 mm²`), `; ` between them.
 
 import type { CircuitResult, Results } from '../analysis/results.js';
 import type { Job, Link } from '../model/types.js';
+import { fmtFixes } from './format.js';
 
 function num(v: number | null | undefined): string {
   if (v === null || v === undefined) return '';
@@ -43,6 +45,27 @@ const COLUMNS: Array<[string, (c: CircuitResult, l: Link | undefined) => string]
   ['max length (m)', (c) => num(c.maxLength)],
   ['status', (c) => c.status],
   ['notes', (c) => c.notes.join('; ')],
+  // Format version 2: the checks beside the loop (method-depth.md), after the version 1 columns.
+  ['phases', (c) => String(c.phases)],
+  ['ib (A)', (c) => num(c.designCurrent)],
+  ['cos φ', (c) => num(c.powerFactor)],
+  ['drop (%)', (c) => num(c.voltageDrop)],
+  ['total drop (%)', (c) => num(c.voltageDropTotal)],
+  ['drop limit (%)', (c) => num(c.voltageDropLimit)],
+  ['voltage status', (c) => c.voltageStatus],
+  ['iz (A)', (c) => num(c.capacity)],
+  ['capacity status', (c) => c.capacityStatus],
+  ['fault level (A)', (c) => num(c.faultLevel)],
+  ['breaking status', (c) => c.breakingStatus],
+  ['earth min (mm²)', (c) => num(c.earthMinArea)],
+  ['withstand status', (c) => c.withstandStatus],
+  ['test limit (Ω)', (c) => num(c.testLimit)],
+  ['measured zs (Ω)', (c) => num(c.measured?.zs)],
+  ['corrected (Ω)', (c) => num(c.measured?.corrected)],
+  ['measured ratio', (c) => num(c.measured?.ratio)],
+  ['measured status', (c) => c.measured?.status ?? ''],
+  ['fixes', (c) => fmtFixes(c)],
+  ['verdict', (c) => c.verdict],
 ];
 
 export const CSV_HEADER: readonly string[] = COLUMNS.map(([h]) => h);

@@ -2,7 +2,7 @@
 // the schedule and the CSV agree, and a test can compare them with analyse().
 
 import type { Cable, Link } from '../model/types.js';
-import type { CircuitResult, LinkRole, Status } from '../analysis/results.js';
+import type { CircuitResult, Fix, LinkRole, Status } from '../analysis/results.js';
 
 /** Ω to 3 decimals (0.576 Ω); an impedance of 10 Ω or more to 2. */
 export function fmtOhm(v: number | null): string {
@@ -99,4 +99,93 @@ export function scheduleOrder(circuits: readonly CircuitResult[]): CircuitResult
       return a.index - b.index;
     })
     .map((x) => x.c);
+}
+
+/** A percentage of U0 (a voltage drop) to 2 decimals below 10 %, else 1: 3.21, 12.5. */
+export function fmtDrop(v: number | null): string {
+  if (v === null) return '—';
+  return Math.abs(v) >= 10 ? v.toFixed(1) : v.toFixed(2);
+}
+
+/** A prospective fault current in kA to 2 decimals below 10 kA, else 1: 6.21, 12.4. */
+export function fmtKa(amps: number | null): string {
+  if (amps === null) return '—';
+  const ka = amps / 1000;
+  return Math.abs(ka) >= 10 ? ka.toFixed(1) : ka.toFixed(2);
+}
+
+/** A cross-section, mm², to 2 decimals (a computed minimum, not a standard size). */
+export function fmtArea(v: number | null): string {
+  if (v === null) return '—';
+  return v >= 100 ? v.toFixed(0) : v.toFixed(2);
+}
+
+/** A power factor to 2 decimals. */
+export function fmtPf(v: number | null): string {
+  if (v === null) return '—';
+  return v.toFixed(2);
+}
+
+/** The word of a check's status (voltage, capacity, breaking, withstand, measured), as the loop's. */
+export function checkWord(s: Status | 'pass' | 'fail' | 'unchecked'): string {
+  return STATUS_WORD[s];
+}
+
+/** The checks beside the loop, by the name a designer uses for each. */
+export const CHECK_NAME = {
+  voltage: 'voltage drop',
+  capacity: 'capacity (Ib ≤ In ≤ Iz)',
+  breaking: 'breaking capacity',
+  withstand: 'earth withstand',
+  measured: 'measured reading',
+} as const;
+
+/** The checks other than the loop that fail (or, for the reading, rely on an RCD), named in words. */
+export function otherFailures(c: CircuitResult): string[] {
+  const out: string[] = [];
+  if (c.voltageStatus === 'fail') out.push('voltage drop');
+  if (c.capacityStatus === 'fail') out.push('capacity');
+  if (c.breakingStatus === 'fail') out.push('breaking capacity');
+  if (c.withstandStatus === 'fail') out.push('earth withstand');
+  if (c.measured !== null && (c.measured.status === 'fail' || c.measured.status === 'rcd')) out.push('measured reading');
+  return out;
+}
+
+/**
+ * The verdict with the checks that decide it, when it says more than the loop status:
+ * `FAIL: voltage drop, capacity`, `RCD-RELIANT: measured reading`; null when the loop status says it all.
+ */
+export function verdictNote(c: CircuitResult): string | null {
+  const others = otherFailures(c);
+  if (c.verdict === c.status && others.length === 0) return null;
+  const loop = c.status === 'fail' || c.status === 'rcd' ? ['loop'] : [];
+  const reasons = [...loop, ...others];
+  return reasons.length > 0 ? `${STATUS_WORD[c.verdict]}: ${reasons.join(', ')}` : STATUS_WORD[c.verdict];
+}
+
+/** A fix in words: `shorten to 45.2 m or less`, `cable 4/2.5 mm²`, `device C16`, `add a 30 mA RCD (then relies on it)`. */
+export function fmtFix(fix: Fix): string {
+  switch (fix.kind) {
+    case 'length':
+      return `shorten to ${fmtMetre(fix.maxLength)} m or less`;
+    case 'size':
+      return `cable ${fmtPlain(fix.active)}/${fmtPlain(fix.earth)} mm²`;
+    case 'device':
+      return `device ${fix.curve}${fmtPlain(fix.rating)}`;
+    case 'rcd':
+      return `add a ${fmtPlain(fix.sensitivity * 1000)} mA RCD (the circuit then relies on the RCD)`;
+  }
+}
+
+/** Every fix of a link in words, `; ` between them; empty when none. */
+export function fmtFixes(c: CircuitResult): string {
+  return c.fixes.map(fmtFix).join('; ');
+}
+
+/** Failures first by verdict (fail, then rcd), then the loop order of scheduleOrder within each verdict. */
+export function verdictOrder(circuits: readonly CircuitResult[]): CircuitResult[] {
+  const rank: Record<Status, number> = { fail: 0, rcd: 1, pass: 2, unchecked: 3 };
+  const loopOrder = scheduleOrder(circuits);
+  const pos = new Map(loopOrder.map((c, i) => [c, i] as const));
+  return [...circuits].sort((a, b) => rank[a.verdict] - rank[b.verdict] || (pos.get(a) ?? 0) - (pos.get(b) ?? 0));
 }

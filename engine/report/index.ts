@@ -15,7 +15,10 @@ export { sheetToSvg } from './svg.js';
 export { scheduleCsv, CSV_HEADER } from './csv.js';
 export { textWidth } from './text.js';
 export { CAUTION_SHORT } from './title-block.js';
-export { ROLE_SHORT, ROLE_LONG } from './format.js';
+export {
+  ROLE_SHORT, ROLE_LONG, CHECK_NAME, fmtFix, fmtFixes, otherFailures, verdictNote, verdictOrder,
+} from './format.js';
+export { describeFaultSource, describeHeadroomLong, describeHeadroomShort } from './sources.js';
 
 /** Every sheet of the printout: diagram sheet(s), circuit schedule, assumptions. */
 export function layoutReport(job: Job, results: Results, options: ReportOptions = {}): Sheet[] {

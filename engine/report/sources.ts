@@ -1,6 +1,7 @@
-// How a supply's source impedance is described on the printout.
+// How a supply's source impedance, its fault level and its headroom are described on the printout.
 
-import type { Source } from '../model/types.js';
+import type { SupplyResult } from '../analysis/results.js';
+import type { Source, SupplyNode } from '../model/types.js';
 import { fmtAmp, fmtOhm, fmtPlain } from './format.js';
 
 /** |Ze| of a known source, Ω; null when unknown. Ze = U0 / Ipf for a stated fault current. */
@@ -57,4 +58,51 @@ export function describeSourceLong(source: Source, u0: number, share: number): s
       );
     }
   }
+}
+
+/** A supply's headroom on one line beside its symbol: `max Ze 0.852 Ω (C07)`, `ask for Ze ≤ 0.852 Ω (C07)`. */
+export function describeHeadroomShort(supply: SupplyNode, result: SupplyResult | undefined): string | null {
+  if (result === undefined || result.maxZe === null) return null;
+  const by = result.setBy !== null ? ` (${result.setBy})` : '';
+  if (supply.source.type === 'unknown') return `ask for Ze ≤ ${fmtOhm(result.maxZe)} Ω${by}`;
+  return `max Ze ${fmtOhm(result.maxZe)} Ω${by}`;
+}
+
+/**
+ * A supply's headroom as a sentence (method-depth.md §9): the largest source impedance for which
+ * every circuit it feeds still passes, and the smallest prospective earth-fault current; for an
+ * unknown source, worded as the figure to ask the distributor for.
+ */
+export function describeHeadroomLong(supply: SupplyNode, result: SupplyResult | undefined, u0: number): string {
+  if (result === undefined) return 'Headroom not computed.';
+  if (result.maxZe === null) return 'Headroom: none stated, the supply feeds no circuit that could be checked (a protective device with a known trip current).';
+  const by = result.setBy !== null ? `, set by ${result.setBy}` : '';
+  if (result.maxZe <= 0) {
+    return `Headroom: none. No source impedance leaves every circuit passing: the drawn loop${result.setBy !== null ? ` of ${result.setBy}` : ''} alone uses the whole budget.`;
+  }
+  const current = result.minFaultCurrent !== null ? fmtCurrent(result.minFaultCurrent) : '—';
+  if (supply.source.type === 'unknown') {
+    return `Headroom: ask the distributor for a source impedance of at most ${fmtOhm(result.maxZe)} Ω (a prospective earth-fault current of at least ${current})${by}. Every circuit then passes for any source at least this strong.`;
+  }
+  const present = sourceMagnitude(supply.source, u0);
+  return `Headroom: every circuit still passes with a source impedance up to ${fmtOhm(result.maxZe)} Ω (a prospective earth-fault current down to ${current})${by}; the source stated is ${fmtOhm(present)} Ω.`;
+}
+
+/** How the source impedance for fault levels was found (method-depth.md §5), and the result. */
+export function describeFaultSource(supply: SupplyNode, result: SupplyResult | undefined, u0: number, cmax: number): string {
+  const phases = result?.phases ?? supply.phases ?? 1;
+  const level = result?.faultLevel ?? null;
+  const at = level !== null ? ` Maximum prospective fault current at the terminals: ${fmtCurrent(level)}.` : '';
+  if (supply.maxFault !== undefined) {
+    const xr = supply.maxFault.xr ?? 1;
+    const z = (cmax * u0) / supply.maxFault.current;
+    return `Fault levels: the distributor's maximum prospective short-circuit current ${fmtCurrent(supply.maxFault.current)} (X/R ${fmtPlain(xr)}) as stated: Zsrc = cmax·U0/I = ${fmtOhm(z)} Ω.${at}`;
+  }
+  const ze = sourceMagnitude(supply.source, u0);
+  if (ze !== null) {
+    return phases === 3
+      ? `Fault levels: no maximum fault current stated; Zsrc = Ze/2 = ${fmtOhm(ze / 2)} Ω for this three-phase supply (half the earth-fault loop taken as the phase path; common practice, from memory).${at}`
+      : `Fault levels: no maximum fault current stated; Zsrc = Ze = ${fmtOhm(ze)} Ω for this single-phase supply (the whole loop, line out and back; common practice, from memory).${at}`;
+  }
+  return 'Fault levels: unknown (no maximum fault current stated and the source impedance unknown), so breaking capacity is not checked; state the distributor\'s maximum prospective fault current (maxFault) to check it.';
 }
