@@ -1,7 +1,7 @@
 // Display helpers shared by the panels: numbers with units, and the status vocabulary
 // (symbol + word + colour together, never colour alone).
 
-import type { Status } from '../../../engine/index.js';
+import type { CheckStatus, Status } from '../../../engine/index.js';
 import { STATUS_SYMBOL, STATUS_WORD } from '../sheet/labels.js';
 
 /** Ω to 3 decimals below 10 Ω, fewer above; '—' for null. */
@@ -62,3 +62,34 @@ export const STATUS_LOOK: Record<Status, StatusLook> = {
 
 // Role words: the same as the printout and the CLI use (short for narrow columns).
 export { ROLE_SHORT, ROLE_LONG } from '../../../engine/report/index.js';
+
+/** The look of a check that has no RCD case (voltage, capacity, breaking, withstand). */
+export const CHECK_LOOK: Record<CheckStatus, StatusLook> = {
+  pass: STATUS_LOOK.pass,
+  fail: STATUS_LOOK.fail,
+  unchecked: STATUS_LOOK.unchecked,
+};
+
+/** A voltage drop given in % of U0; '—' for null. */
+export function dropPercent(v: number | null | undefined): string {
+  return num(v, 2, '%');
+}
+
+/** A fault level: kA with the amps beside, or '—'. */
+export function kiloamps(v: number | null | undefined): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  return `${num(v / 1000, 2)} kA`;
+}
+
+/** An area in mm², to two decimals (a minimum area is not rounded up to a standard size here). */
+export function squareMm(v: number | null | undefined): string {
+  return num(v, 2, 'mm²');
+}
+
+/** cos φ to two decimals. */
+export function powerFactor(v: number | null | undefined): string {
+  return num(v, 2);
+}
+
+// The checks of a verdict and their words: the same as the sheet's labels use.
+export { CHECKS, checkStatuses, failingChecks, type CheckKey } from '../sheet/labels.js';

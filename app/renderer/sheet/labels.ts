@@ -73,3 +73,172 @@ export const USE_LABEL: Record<string, string> = {
   motor: 'motor',
   other: 'other',
 };
+
+// ---- Loads, drops, faults and readings (format version 2) ----
+
+/** The checks that make up a verdict, in the order they are named. */
+export const CHECKS = [
+  { key: 'loop', word: 'loop impedance' },
+  { key: 'voltage', word: 'voltage drop' },
+  { key: 'capacity', word: 'cable capacity' },
+  { key: 'breaking', word: 'breaking capacity' },
+  { key: 'withstand', word: 'earth withstand' },
+  { key: 'measured', word: 'measured reading' },
+] as const;
+export type CheckKey = (typeof CHECKS)[number]['key'];
+
+/** The status of each check of one circuit (the measured one 'unchecked' without a reading). */
+export function checkStatuses(r: CircuitResult): Record<CheckKey, Status> {
+  return {
+    loop: r.status,
+    voltage: r.voltageStatus,
+    capacity: r.capacityStatus,
+    breaking: r.breakingStatus,
+    withstand: r.withstandStatus,
+    measured: r.measured?.status ?? 'unchecked',
+  };
+}
+
+/** The words of the checks that fail, in the order of CHECKS (empty when none fails). */
+export function failingChecks(r: CircuitResult): string[] {
+  const s = checkStatuses(r);
+  return CHECKS.filter((c) => s[c.key] === 'fail').map((c) => c.word);
+}
+
+const SEVERITY: Record<Status, number> = { fail: 3, rcd: 2, pass: 1, unchecked: 0 };
+
+/**
+ * The status a circuit is drawn with: its verdict, or its loop status when that is more severe
+ * (by the contract the verdict is never milder than the loop; this keeps a loop failure flagged
+ * whatever the verdict says).
+ */
+export function shownVerdict(r: CircuitResult | undefined): Status {
+  if (!r) return 'unchecked';
+  return SEVERITY[r.status] > SEVERITY[r.verdict] ? r.status : r.verdict;
+}
+
+/**
+ * The verdict line: symbol and word, and for a failure which checks fail. A circuit whose design
+ * passes but whose measured reading fails says so.
+ */
+export function verdictText(r: CircuitResult | undefined): string {
+  const shown = shownVerdict(r);
+  const head = statusText(shown);
+  if (!r || shown !== 'fail') return head;
+  const failing = failingChecks(r);
+  if (failing.length === 1 && failing[0] === 'measured reading') return `${head}: design passes, reading fails`;
+  return failing.length > 0 ? `${head}: ${failing.join(', ')}` : head;
+}
+
+/** A percentage of U0 for a label: one decimal, trailing zero dropped. */
+function pct(v: number): string {
+  return String(Number(v.toFixed(v < 10 ? 1 : 0)));
+}
+
+function amp(v: number): string {
+  return v >= 100 ? String(Math.round(v)) : String(Number(v.toFixed(1)));
+}
+
+/** "Ib 16 A · Vd 3.1 / 5 %" (total drop against its limit where one applies); '' without Ib. */
+export function loadLine(r: CircuitResult | undefined): string {
+  if (!r || r.designCurrent === null) return '';
+  const ib = `Ib ${amp(r.designCurrent)} A`;
+  if (r.voltageDropTotal === null) return ib;
+  const limit = r.voltageDropLimit !== null ? ` / ${pct(r.voltageDropLimit)}` : '';
+  return `${ib} · Vd ${pct(r.voltageDropTotal)}${limit} %`;
+}
+
+/** "meas. 0.62 Ω → 0.74 Ω, ✓ 81 %": the reading, corrected, and its result; '' without one. */
+export function measuredLine(r: CircuitResult | undefined): string {
+  const m = r?.measured;
+  if (!m) return '';
+  const ratio = m.ratio !== null ? ` ${Math.round(m.ratio * 100)} %` : '';
+  return `meas. ${ohms(m.zs)} → ${ohms(m.corrected)} Ω, ${STATUS_SYMBOL[m.status]} ${STATUS_WORD[m.status]}${ratio}`;
+}
+
+/** "Imax 6.2 kA": the largest fault current at a node; '' when unknown. */
+export function faultLevelLine(current: number | null | undefined): string {
+  if (current === null || current === undefined || !Number.isFinite(current)) return '';
+  return current >= 1000 ? `Imax ${num(current / 1000)} kA` : `Imax ${Math.round(current)} A`;
+}
+
+/**
+ * A supply's headroom: for a known source the largest Ze the design tolerates, for an unknown
+ * one the fault current to ask the distributor for.
+ */
+export function headroomLine(source: Source, maxZe: number | null | undefined, minFaultCurrent: number | null | undefined): string {
+  if (source.type === 'unknown') {
+    if (minFaultCurrent !== null && minFaultCurrent !== undefined && Number.isFinite(minFaultCurrent)) return `need Ipf ≥ ${Math.ceil(minFaultCurrent)} A`;
+    return maxZe !== null && maxZe !== undefined ? `need Ze ≤ ${ohms(maxZe)} Ω` : '';
+  }
+  return maxZe !== null && maxZe !== undefined ? `Ze max ${ohms(maxZe)} Ω` : '';
+}
+
+export type LabelLineKey = 'device' | 'cable' | 'result' | 'load' | 'measured' | 'verdict';
+export interface LabelLine {
+  key: LabelLineKey;
+  text: string;
+}
+
+/** Every line a link label can show, in drawing order (empty lines left out). */
+export function labelLines(link: Link, r: CircuitResult | undefined): LabelLine[] {
+  const lines: LabelLine[] = [
+    { key: 'device', text: deviceLine(link, r) },
+    { key: 'cable', text: cableLine(link) },
+    { key: 'result', text: resultLine(r) },
+    { key: 'load', text: loadLine(r) },
+    { key: 'measured', text: measuredLine(r) },
+    { key: 'verdict', text: verdictText(r) },
+  ];
+  return lines.filter((l) => l.text !== '');
+}
+
+/**
+ * Which lines to keep when only `count` fit: the verdict always, then the line of a failing check,
+ * then the loop result, load, reading, device and cable. Kept lines stay in drawing order.
+ */
+export function pickLines(lines: readonly LabelLine[], count: number, r: CircuitResult | undefined): LabelLine[] {
+  if (count >= lines.length) return lines.slice();
+  const s = r ? checkStatuses(r) : null;
+  const rank = (l: LabelLine): number => {
+    if (l.key === 'verdict') return 0;
+    const failing =
+      (l.key === 'result' && s?.loop === 'fail') ||
+      (l.key === 'load' && (s?.voltage === 'fail' || s?.capacity === 'fail')) ||
+      (l.key === 'measured' && s?.measured === 'fail');
+    if (failing) return 1;
+    return { result: 2, load: 3, measured: 4, device: 5, cable: 6 }[l.key];
+  };
+  const keep = new Set([...lines].sort((a, b) => rank(a) - rank(b)).slice(0, Math.max(1, count)).map((l) => l.key));
+  return lines.filter((l) => keep.has(l.key));
+}
+
+/** The smallest type a label is drawn in, in screen pixels, whatever the zoom. */
+export const MIN_LABEL_PX = 9;
+/** The label's type at zoom 1 and above (flow px); it never grows past this. */
+export const LABEL_FONT = 11;
+export const LABEL_LINE = 1.3;
+/** Border and padding above and below the lines (flow px). */
+export const LABEL_PAD = 6;
+
+export interface LabelFit {
+  /** Lines to draw. */
+  count: number;
+  /** Type size in flow px. */
+  font: number;
+}
+
+/**
+ * How many of `wanted` lines fit in `room` flow px at `zoom`, and at what size: as many as fit with
+ * type no smaller than MIN_LABEL_PX on screen and no larger than LABEL_FONT; when zoomed out, fewer
+ * lines rather than smaller type. Never taller than the room (no label runs under a part).
+ */
+export function fitLabel(wanted: number, room: number, zoom: number): LabelFit {
+  const z = zoom > 0 ? zoom : 1;
+  const smallest = MIN_LABEL_PX / z;
+  for (let n = wanted; n >= 1; n--) {
+    const font = Math.min(LABEL_FONT, (room - LABEL_PAD) / (n * LABEL_LINE));
+    if (font >= smallest - 1e-9) return { count: n, font };
+  }
+  return { count: 1, font: Math.max(1, Math.min(LABEL_FONT, (room - LABEL_PAD) / LABEL_LINE)) };
+}
