@@ -4,9 +4,8 @@
 import type { Job } from '../model/types.js';
 import { magnitude, sum, type Complex } from './complex.js';
 import { resolveRules } from './basis.js';
-import { checkLink } from './check.js';
-import { LoopSums } from './loop.js';
-import { Network } from './network.js';
+import { blankResult, checkLoop } from './check.js';
+import { Sums } from './sums.js';
 import type { Method, Status } from './results.js';
 
 export interface Segment {
@@ -38,32 +37,36 @@ export interface Breakdown {
 
 export function loopBreakdown(job: Job, linkId: string): Breakdown | null {
   const rules = resolveRules(job.rules);
-  const net = new Network(job);
-  const link = net.linkById.get(linkId);
-  if (!link) return null;
-  const links = net.linksTo(link.to);
-  if (!links || links.length === 0) return null;
-  const sums = new LoopSums(net, rules);
-  const result = checkLink(sums, link);
+  const sums = new Sums(job, rules);
+  const order = sums.order;
+  const index = job.links.findIndex((l) => l.id === linkId);
+  if (index < 0 || !sums.reached(index)) return null;
+  const result = blankResult(job.links[index]!, order.roles[index]!);
+  checkLoop(sums, index, result);
   if (!result.method) return null;
-  const protecting = net.protectingLink(link);
-  const protectIndex = protecting ? links.findIndex((l) => l.id === protecting.id) : links.length;
+  // The links from the supply down to this link's far end.
+  const path: number[] = [];
+  for (let n = order.linkTo[index]!, f = order.feederOf[n]!; f >= 0; n = order.linkFrom[f]!, f = order.feederOf[n]!) path.push(f);
+  path.reverse();
+  const protecting = sums.protect[index]!;
+  const protectIndex = protecting >= 0 ? path.indexOf(protecting) : path.length;
   const limit = result.limit;
   const share = (z: number): number | null => (limit ? z / limit : null);
   const segments: Segment[] = [];
   const parts: Complex[] = [];
-  const ze = sums.ze(link.to);
+  const ze = sums.zeOf(order.linkTo[index]!);
   if (ze) {
-    const supply = net.supplyOf(link.to)!;
+    const supply = order.supplyNode(order.linkTo[index]!)!;
     parts.push(ze);
     const z = magnitude(ze);
     segments.push({ kind: 'source', id: supply.id, label: `Ze at ${supply.name ?? supply.id}`, r: ze.re, x: ze.im, z, share: share(z), upstream: true });
   }
-  links.forEach((l, i) => {
-    const zl = sums.link(l);
+  path.forEach((li, i) => {
+    const l = job.links[li]!;
+    const zl = { re: sums.linkRe[li]!, im: sums.linkIm[li]! };
     parts.push(zl);
     const z = magnitude(zl);
-    const label = `${l.id}${l.name ? ` ${l.name}` : ''} (${net.role(l).replace('-', ' ')})`;
+    const label = `${l.id}${l.name ? ` ${l.name}` : ''} (${order.roles[li]!.replace('-', ' ')})`;
     segments.push({ kind: 'link', id: l.id, label, r: zl.re, x: zl.im, z, share: share(z), upstream: i < protectIndex });
   });
   return {

@@ -1,39 +1,53 @@
-// The check of one link: its loop against the budget of its protecting device.
+// The loop check of one link: its loop against the budget of its protecting device.
 //
 //   budget B = c · U0 / Ia
 //   known source:    Zs = |Ze + Σ links supply → far end| ≤ B;  ratio = Zs / B;  limit = B
 //   unknown source:  own = |Σ origin → far end| ≤ s · B  and  upstream = |Σ supply → origin| ≤ (1 − s) · B
 //                    ratio = max(own / (s·B), upstream / ((1 − s)·B));  limit = s · B
 // A failing circuit whose protecting link has an RCD relies on it: status `rcd`.
+// A loop of 0 Ω has no fault current ("no impedance in the loop") and is checked as if the
+// current were above every trip current.
 
-import type { Link } from '../model/types.js';
+import type { Device, Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
-import { add, magnitude, sub } from './complex.js';
-import { clearingTime, deviceMark, tripCurrent } from './devices.js';
+import { magnitude, type Complex } from './complex.js';
+import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripCurrent } from './devices.js';
 import { impedancePerMetre } from './impedance.js';
-import { loopParts, type LoopSums } from './loop.js';
 import { maxLength } from './max-length.js';
 import { requiredTime } from './required-time.js';
 import type { CircuitResult, Status } from './results.js';
+import type { Sums } from './sums.js';
+import { atMost } from './tolerance.js';
 
 const pct = (v: number): string => `${(v * 100).toFixed(0)} %`;
 const ohms = (v: number): string => `${v.toFixed(3)} Ω`;
 
-export function checkLink(sums: LoopSums, link: Link): CircuitResult {
-  const { net, rules } = sums;
-  const role = net.role(link);
-  const protecting = net.protectingLink(link);
-  const device = protecting?.device ?? null;
-  const notes = sizeNotes(link.cable);
-  const result: CircuitResult = {
+/** What the loop check leaves for the later checks and the fixes of one link. */
+export interface LoopFacts {
+  protecting: number;
+  device: Device | null;
+  /** Ze at this link's supply, when known. */
+  ze: Complex | null;
+  /** c·U0/Ia, Ω; null when Ia is unknown or the link is unprotected. */
+  budget: number | null;
+  /** The impedance before the link that its own length adds to (Ze included when known). */
+  before: Complex | null;
+  /** The loop of the link per metre. */
+  perMetre: Complex;
+  /** Known source and a loop of 0 Ω at the far end. */
+  zeroLoop: boolean;
+}
+
+export function blankResult(link: Link, role: CircuitResult['role']): CircuitResult {
+  return {
     link: link.id,
     name: link.name ?? null,
     from: link.from,
     to: link.to,
     role,
     method: null,
-    protectedBy: protecting?.id ?? null,
-    device: device ? deviceMark(device) : null,
+    protectedBy: null,
+    device: null,
     tripCurrent: null,
     requiredTime: null,
     zs: null,
@@ -45,7 +59,7 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
     ratio: null,
     maxLength: null,
     status: 'unchecked',
-    notes,
+    notes: sizeNotes(link.cable),
     phases: 1,
     designCurrent: null,
     powerFactor: null,
@@ -64,31 +78,58 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
     fixes: [],
     verdict: 'unchecked',
   };
+}
 
-  const parts = loopParts(sums, link, protecting?.from ?? null);
-  if (!parts) {
+export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFacts {
+  const { order, rules } = sums;
+  const link = order.links[l]!;
+  const notes = result.notes;
+  const protecting = sums.protect[l]!;
+  const device = protecting >= 0 ? order.links[protecting]!.device ?? null : null;
+  result.protectedBy = protecting >= 0 ? order.links[protecting]!.id : null;
+  result.device = device ? deviceMark(device) : null;
+  const perMetre = impedancePerMetre(link.cable, rules);
+  const facts: LoopFacts = { protecting, device, ze: null, budget: null, before: null, perMetre, zeroLoop: false };
+
+  const to = order.linkTo[l]!;
+  const from = order.linkFrom[l]!;
+  if (!sums.reached(l)) {
     notes.unshift('no supply reaches this link; it is not checked');
-    return result;
+    return facts;
   }
-  const ze = sums.ze(link.to);
+  const ze = sums.zeOf(to);
+  facts.ze = ze;
   result.method = ze ? 'known-source' : 'unknown-source';
   const c = rules.voltageFactor.value;
   const u0 = rules.voltage.value;
+  const drawn = sums.drawn(to);
   if (ze) {
-    result.zs = magnitude(add(ze, parts.drawn));
-    result.faultCurrent = result.zs > 0 ? (c * u0) / result.zs : null;
+    result.zs = magnitude({ re: ze.re + drawn.re, im: ze.im + drawn.im });
+    if (result.zs > 0) result.faultCurrent = (c * u0) / result.zs;
+    else {
+      facts.zeroLoop = true;
+      notes.push('no impedance in the loop: the fault current cannot be computed; checked as if it were above every trip current');
+    }
   }
-  if (!protecting || !device) {
+  if (!device) {
     notes.unshift('no protective device at the origin of this circuit; its impedance is counted but it is not checked');
-    return result;
+    return facts;
   }
 
-  result.own = magnitude(parts.own);
-  result.upstream = magnitude(parts.upstream);
-  const tReq = requiredTime(rules.basis, link, role, net.nodeById.get(link.to), device);
+  const origin = order.linkFrom[protecting]!;
+  const upstream = sums.drawn(origin);
+  const own = { re: drawn.re - upstream.re, im: drawn.im - upstream.im };
+  result.own = magnitude(own);
+  result.upstream = magnitude(upstream);
+  const far = order.nodes[to];
+  const tReq = requiredTime(rules.basis, link, order.roles[l]!, far, device);
   result.requiredTime = tReq;
   const trip = tripCurrent(device, tReq, rules);
-  if (ze && result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, trip.ia);
+  if (ze) {
+    if (facts.zeroLoop) result.clearingTime = device.type === 'curve' ? device.points[device.points.length - 1]![1] : INSTANTANEOUS_TIME;
+    else if (result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, trip.ia);
+  }
+  const beforeDrawn = sums.drawn(from);
   let status: Status;
   if (trip.ia === null) {
     notes.unshift(trip.note);
@@ -96,15 +137,16 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
   } else {
     const ia = trip.ia;
     const budget = (c * u0) / ia;
+    facts.budget = budget;
     result.tripCurrent = ia;
-    const perMetre = impedancePerMetre(link.cable, rules);
     if (ze) {
       result.limit = budget;
       result.ratio = result.zs! / budget;
-      result.maxLength = maxLength(add(ze, parts.beforeLink), perMetre, budget);
-      status = result.ratio <= 1 ? 'pass' : 'fail';
+      facts.before = { re: ze.re + beforeDrawn.re, im: ze.im + beforeDrawn.im };
+      result.maxLength = maxLength(facts.before, perMetre, budget);
+      status = atMost(result.ratio, 1) ? 'pass' : 'fail';
       if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${result.faultCurrent?.toFixed(0)} A is below the ${ia.toFixed(0)} A needed to disconnect within ${tReq} s`);
-      if (result.clearingTime === null && device.type === 'curve') {
+      if (!facts.zeroLoop && result.clearingTime === null && device.type === 'curve') {
         status = 'fail';
         notes.push(`the fault current is below the lowest current of the device's time–current curve; its clearing time is unknown`);
       }
@@ -116,22 +158,23 @@ export function checkLink(sums: LoopSums, link: Link): CircuitResult {
       const upRatio = upLimit > 0 ? result.upstream / upLimit : result.upstream > 0 ? Number.MAX_VALUE : 0;
       result.limit = ownLimit;
       result.ratio = Math.max(ownRatio, upRatio);
-      const beforeOwn = sub(parts.beforeLink, parts.upstream);
-      result.maxLength = maxLength(beforeOwn, perMetre, ownLimit);
-      status = result.ratio <= 1 ? 'pass' : 'fail';
-      if (ownRatio > 1) notes.push(`the circuit's own loop ${ohms(result.own)} exceeds ${pct(share)} of the loop budget (${ohms(ownLimit)})`);
-      if (upRatio > 1) {
+      facts.before = { re: beforeDrawn.re - upstream.re, im: beforeDrawn.im - upstream.im };
+      result.maxLength = maxLength(facts.before, perMetre, ownLimit);
+      status = atMost(result.ratio, 1) ? 'pass' : 'fail';
+      if (!atMost(ownRatio, 1)) notes.push(`the circuit's own loop ${ohms(result.own)} exceeds ${pct(share)} of the loop budget (${ohms(ownLimit)})`);
+      if (!atMost(upRatio, 1)) {
         notes.push(
           `the drawn mains and submains upstream use ${ohms(result.upstream)}, more than the ${pct(1 - share)} of the loop budget (${ohms(upLimit)}) that the unknown-source method leaves for them`,
         );
       }
     }
   }
-  if (status === 'fail' && protecting.rcd) {
+  const protectingLink = order.links[protecting]!;
+  if (status === 'fail' && protectingLink.rcd) {
     status = 'rcd';
-    notes.push(`disconnection relies on the ${(protecting.rcd.sensitivity * 1000).toFixed(0)} mA RCD of ${protecting.id}`);
+    notes.push(`disconnection relies on the ${(protectingLink.rcd.sensitivity * 1000).toFixed(0)} mA RCD of ${protectingLink.id}`);
   }
-  if (protecting.id !== link.id) notes.push(`protected by the device of ${protecting.id}`);
+  if (protecting !== l) notes.push(`protected by the device of ${protectingLink.id}`);
   result.status = status;
-  return result;
+  return facts;
 }

@@ -1,0 +1,54 @@
+// Cable capacity: Ib ≤ In ≤ Iz (IEC 60364-4-43 clause 433.1, AS/NZS 3000:2018 clause 2.5.3.1,
+// from memory; method-depth.md §4).
+//
+// Iz: the cable's stated `capacity` (all parallel sets together, as installed); otherwise under
+// the iec basis the default table (capacity-table.ts) for its material, insulation and loaded
+// conductors (2 for 1 phase, 3 for 3 phases), times `derating`, times n. Under au-nz there is no
+// built-in table: Iz is null unless stated.
+
+import type { Link } from '../model/types.js';
+import type { ResolvedRules } from './basis.js';
+import { tableCapacity } from './capacity-table.js';
+import type { CheckStatus } from './results.js';
+import { atMost } from './tolerance.js';
+
+export interface CapacityResult {
+  iz: number | null;
+  status: CheckStatus;
+  notes: string[];
+}
+
+const amps = (v: number): string => `${Number(v.toPrecision(4))} A`;
+
+export function cableCapacity(link: Link, phases: number, rules: ResolvedRules): { iz: number | null; note?: string } {
+  const cable = link.cable;
+  if (cable.capacity !== undefined) return { iz: cable.capacity };
+  if (rules.basis !== 'iec') return { iz: null };
+  const perSet = tableCapacity(cable.material, cable.insulation ?? 'pvc', phases === 3 ? 3 : 2, cable.active);
+  if (perSet === null) {
+    return { iz: null, note: `no default current rating for ${cable.active} mm² ${cable.material} ${(cable.insulation ?? 'pvc').toUpperCase()} in the built-in table; enter the cable's capacity Iz` };
+  }
+  return { iz: perSet * (cable.derating ?? 1) * (cable.parallel ?? 1) };
+}
+
+/** Ib ≤ In ≤ Iz, or Ib ≤ Iz alone for a link without a protecting device. */
+export function checkCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules): CapacityResult {
+  const { iz, note } = cableCapacity(link, phases, rules);
+  const notes = note ? [note] : [];
+  if (ib === null || iz === null) return { iz, status: 'unchecked', notes };
+  let ok = true;
+  if (rating !== null) {
+    if (!atMost(ib, rating)) {
+      ok = false;
+      notes.push(`capacity: Ib ≤ In fails: the design current ${amps(ib)} exceeds the device rating ${amps(rating)}`);
+    }
+    if (!atMost(rating, iz)) {
+      ok = false;
+      notes.push(`capacity: In ≤ Iz fails: the device rating ${amps(rating)} exceeds the cable's capacity ${amps(iz)}`);
+    }
+  } else if (!atMost(ib, iz)) {
+    ok = false;
+    notes.push(`capacity: Ib ≤ Iz fails: the design current ${amps(ib)} exceeds the cable's capacity ${amps(iz)}`);
+  }
+  return { iz, status: ok ? 'pass' : 'fail', notes };
+}

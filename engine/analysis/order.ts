@@ -1,0 +1,124 @@
+// The installation ordered once: every node and link numbered, each node's feeding link and
+// parent, and one pre-order of the trees (parents before children). Every later pass works on
+// arrays by index over this order; nothing here recurses, so no file can exhaust the stack.
+//
+// Trees start at the supplies (in file order); nodes that no supply reaches are ordered after
+// them from their own topmost node, so their loads still roll up. A node inside a cycle (only in
+// a job the validator would refuse) is left out of the order.
+
+import type { Job, JobNode, Link, SupplyNode } from '../model/types.js';
+import type { LinkRole } from './results.js';
+
+export class TreeOrder {
+  readonly nodes: readonly JobNode[];
+  readonly links: readonly Link[];
+  readonly nodeIndex = new Map<string, number>();
+  /** Node index of each link's origin and far end (−1 when missing). */
+  readonly linkFrom: Int32Array;
+  readonly linkTo: Int32Array;
+  /** The link feeding each node (−1 for none). */
+  readonly feederOf: Int32Array;
+  /** Node indices, parents before children. */
+  readonly pre: Int32Array;
+  /** The supply node index at the top of each node's tree; −1 when no supply reaches it. */
+  readonly supplyOf: Int32Array;
+  /** Links leaving each node, as a compressed list: childLinks[childStart[n] .. childStart[n+1]). */
+  readonly childStart: Int32Array;
+  readonly childLinks: Int32Array;
+  /** Each link's role. */
+  readonly roles: LinkRole[];
+
+  constructor(job: Job) {
+    const nodes = job.nodes;
+    const links = job.links;
+    this.nodes = nodes;
+    this.links = links;
+    const nn = nodes.length;
+    const nl = links.length;
+    nodes.forEach((n, i) => {
+      if (!this.nodeIndex.has(n.id)) this.nodeIndex.set(n.id, i);
+    });
+    this.linkFrom = new Int32Array(nl);
+    this.linkTo = new Int32Array(nl);
+    this.feederOf = new Int32Array(nn).fill(-1);
+    const outCount = new Int32Array(nn + 1);
+    for (let l = 0; l < nl; l++) {
+      const from = this.nodeIndex.get(links[l]!.from) ?? -1;
+      const to = this.nodeIndex.get(links[l]!.to) ?? -1;
+      this.linkFrom[l] = from;
+      this.linkTo[l] = to;
+      if (to >= 0 && from >= 0 && to !== from && this.feederOf[to] === -1 && nodes[to]!.kind !== 'supply') this.feederOf[to] = l;
+      if (from >= 0) outCount[from + 1]! += 1;
+    }
+    this.childStart = new Int32Array(nn + 1);
+    for (let n = 0; n < nn; n++) this.childStart[n + 1] = this.childStart[n]! + outCount[n + 1]!;
+    this.childLinks = new Int32Array(this.childStart[nn]!);
+    const fill = this.childStart.slice(0, nn);
+    for (let l = 0; l < nl; l++) {
+      const from = this.linkFrom[l]!;
+      if (from >= 0 && this.feederOf[this.linkTo[l]!] === l) this.childLinks[fill[from]!++] = l;
+    }
+
+    // Pre-order from the supplies, then from every other node that nothing feeds.
+    this.supplyOf = new Int32Array(nn).fill(-1);
+    const pre = new Int32Array(nn);
+    let count = 0;
+    const placed = new Uint8Array(nn);
+    const stack: number[] = [];
+    const walkFrom = (root: number, supply: number): void => {
+      stack.push(root);
+      while (stack.length) {
+        const n = stack.pop()!;
+        if (placed[n]) continue;
+        placed[n] = 1;
+        pre[count++] = n;
+        this.supplyOf[n] = supply;
+        const end = this.childStart[n + 1]!;
+        // Pushed in reverse so children come out in file order.
+        for (let k = end - 1; k >= this.childStart[n]!; k--) {
+          const child = this.linkTo[this.childLinks[k]!]!;
+          if (!placed[child]) stack.push(child);
+        }
+      }
+    };
+    for (let n = 0; n < nn; n++) if (nodes[n]!.kind === 'supply') walkFrom(n, n);
+    for (let n = 0; n < nn; n++) if (!placed[n] && this.feederOf[n] === -1) walkFrom(n, -1);
+    this.pre = pre.slice(0, count);
+
+    this.roles = links.map((link, l) => {
+      const to = this.linkTo[l]!;
+      const from = this.linkFrom[l]!;
+      if (to >= 0 && nodes[to]!.kind === 'point') return 'final-subcircuit';
+      if (from >= 0 && nodes[from]!.kind === 'supply') return 'consumer-mains';
+      return 'submain';
+    });
+  }
+
+  /** The node feeding node n through its feeder (−1 at the top). */
+  parentOf(n: number): number {
+    const l = this.feederOf[n]!;
+    return l >= 0 ? this.linkFrom[l]! : -1;
+  }
+
+  supplyNode(n: number): SupplyNode | null {
+    const s = n >= 0 ? this.supplyOf[n]! : -1;
+    return s >= 0 ? (this.nodes[s] as SupplyNode) : null;
+  }
+
+  /** Node and link ids alternately from the supply to the far end of link l; null when unreached. */
+  pathIds(l: number): string[] | null {
+    const to = this.linkTo[l]!;
+    if (to < 0 || this.supplyOf[to]! < 0) return null;
+    const ids: string[] = [];
+    let n = to;
+    let guard = this.nodes.length + 1;
+    while (guard-- > 0) {
+      ids.push(this.nodes[n]!.id);
+      const f = this.feederOf[n]!;
+      if (f < 0) break;
+      ids.push(this.links[f]!.id);
+      n = this.linkFrom[f]!;
+    }
+    return ids.reverse();
+  }
+}

@@ -1,0 +1,45 @@
+// Withstand of the protective conductor: the adiabatic check (method-depth.md §6;
+// IEC 60364-5-54 clause 543.1.2, AS/NZS 3000:2018 clause 5.3.3.1.2, from memory).
+//
+//   S_pe,min = √E / k,   E = If² · t,   capped at the device's let-through I²t when stated
+// If is the earth-fault current c · U0 / Zs (known source only), t the clearing time at If.
+// Passes when the link's total earth area n · Se ≥ S_pe,min. k from k-table.ts.
+
+import type { Device, Link } from '../model/types.js';
+import type { CheckStatus } from './results.js';
+import { kFactor } from './k-table.js';
+import { atMost } from './tolerance.js';
+
+export interface WithstandResult {
+  earthMinArea: number | null;
+  status: CheckStatus;
+  notes: string[];
+}
+
+const UNCHECKED: WithstandResult = { earthMinArea: null, status: 'unchecked', notes: [] };
+
+/**
+ * faultCurrent null with zeroLoop true: a loop of 0 Ω, checked only through the let-through.
+ * clearing: the device's time at the fault current (null when unknown).
+ */
+export function checkWithstand(link: Link, device: Device | null, knownSource: boolean, faultCurrent: number | null, zeroLoop: boolean, clearing: number | null): WithstandResult {
+  if (!device || !knownSource || clearing === null) return UNCHECKED;
+  let energy: number;
+  if (faultCurrent === null) {
+    if (!zeroLoop || device.letThrough === undefined) return UNCHECKED;
+    energy = device.letThrough;
+  } else {
+    energy = faultCurrent * faultCurrent * clearing;
+    if (device.letThrough !== undefined) energy = Math.min(energy, device.letThrough);
+  }
+  const cable = link.cable;
+  const k = kFactor(cable.earthMaterial ?? cable.material, cable.insulation ?? 'pvc', cable.earthInCable ?? true);
+  const min = Math.sqrt(energy) / k;
+  const area = cable.earth * (cable.parallel ?? 1);
+  if (atMost(min, area)) return { earthMinArea: min, status: 'pass', notes: [] };
+  return {
+    earthMinArea: min,
+    status: 'fail',
+    notes: [`withstand: the protective conductor ${area} mm² is below the ${min.toFixed(2)} mm² it needs to carry the fault until the device clears it (S = √(I²t) / k, k = ${k})`],
+  };
+}
