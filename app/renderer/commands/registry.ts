@@ -5,6 +5,8 @@ import { freeCentre, newPart } from '../sheet/parts.js';
 import { autoArrange } from '../sheet/arrange.js';
 import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
 import type { Command, CommandContext } from './types.js';
+import { importReadings } from '../io/readings-import.js';
+import { useTestingView } from '../panels/testing/view.js';
 
 export type { Command, CommandContext } from './types.js';
 
@@ -54,6 +56,10 @@ export const COMMANDS: Command[] = [
     enabled: (_s, env) => env.desktop, run: (ctx) => ctx.exportPdf(),
   },
   { id: 'file.print', label: 'Print…', shortcut: 'Mod+P', group: 'file', toolbar: 'Print', enabled: any, run: (ctx) => ctx.print() },
+  {
+    id: 'readings.import', label: 'Import Readings (CSV)…', shortcut: null, group: 'file', toolbar: 'Import readings',
+    separatorBefore: true, enabled: any, run: () => importReadings(),
+  },
 
   {
     id: 'edit.undo', label: 'Undo', shortcut: 'Mod+Z', group: 'edit', toolbar: 'Undo', enabled: (s) => s.canUndo,
@@ -171,6 +177,13 @@ export const COMMANDS: Command[] = [
       const s = ctx.store.getState();
       if (s.highlightPath || s.breakdownLink) s.setHighlight(null, null);
       else s.select({ nodes: [], links: [] });
+    },
+  },
+  {
+    id: 'view.testing', label: 'Testing View (readings on site)', shortcut: null, group: 'view', separatorBefore: true, enabled: any,
+    run: () => {
+      const v = useTestingView.getState();
+      v.setView(v.view === 'testing' ? 'design' : 'testing');
     },
   },
   { id: 'help.about', label: 'About Loopwright', shortcut: 'F1', group: 'help', enabled: any, run: (ctx) => ctx.openAbout() },

@@ -8,6 +8,7 @@ import { NumberField, Readout, SelectField, TextField } from '../fields/fields.j
 import { ROLE_LONG, num } from '../format.js';
 import { CircuitResults } from './CircuitResults.js';
 import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
+import { FixList } from '../fixes/FixButtons.js';
 import { FeedPicker } from '../../app/FeedPicker.js';
 
 const MATERIALS: ReadonlyArray<{ value: Material; label: string }> = [
@@ -101,6 +102,7 @@ export function LinkDetails({ link }: { link: Link }) {
         </fieldset>
       </div>
       <CircuitResults linkId={id} />
+      <FixList linkId={id} />
     </div>
   );
 }

@@ -11,6 +11,8 @@ import {
   type ScheduleRowData, type SortState, type StatusFilter,
 } from './columns.js';
 import { ROW_HEIGHT, ScheduleRow } from './ScheduleRow.js';
+import { ScheduleViewSwitch, TestingView } from '../testing/TestingView.js';
+import { useTestingView } from '../testing/view.js';
 
 export const WINDOW_THRESHOLD = 300;
 const OVERSCAN = 10;
@@ -53,7 +55,13 @@ function moveByKey(e: KeyboardEvent<HTMLTableSectionElement>, shown: readonly Sc
   });
 }
 
+/** The design schedule, or the testing view (readings on site) when that is chosen. */
 export function SchedulePanel() {
+  const view = useTestingView((s) => s.view);
+  return view === 'testing' ? <TestingView /> : <DesignSchedule />;
+}
+
+function DesignSchedule() {
   const links = useEditor((s) => s.job.links);
   const resultById = useEditor((s) => s.resultById);
   const selectedLinks = useEditor((s) => s.selection.links);
@@ -103,6 +111,7 @@ export function SchedulePanel() {
     <section className="lwp-panel lwp-schedule" data-panel="schedule" aria-label="Circuit schedule">
       <header className="lwp-panel-head">
         <h2 className="lwp-panel-title">Circuit schedule</h2>
+        <ScheduleViewSwitch />
         <div className="lwp-filters" role="group" aria-label="Filter by status">
           {STATUS_FILTERS.map((f) => (
             <button key={f} type="button" data-status-filter={f} aria-pressed={filter === f}

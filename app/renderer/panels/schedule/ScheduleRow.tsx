@@ -6,6 +6,7 @@ import { deviceMark, type Device } from '../../../../engine/index.js';
 import { selectLink, selectNode, selectResult, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { StatusBadge } from '../details/CircuitResults.js';
+import { FixMenu } from '../fixes/FixButtons.js';
 import { NumberField, TextField } from '../fields/fields.js';
 import { ROLE_SHORT, ROLE_LONG, num, ohms, ohmsValue, percentValue } from '../format.js';
 
@@ -111,7 +112,7 @@ export const ScheduleRow = memo(function ScheduleRow({ id, selected, sizesId }: 
       <td className="lwp-num">{ohmsValue(r?.limit)}</td>
       <td className="lwp-num">{num(r?.tripCurrent, 1)}</td>
       <td className="lwp-num">{num(r?.requiredTime, 2)}</td>
-      <td className="lwp-num">{r?.maxLength != null && Number.isFinite(r.maxLength) ? r.maxLength.toFixed(1) : "—"}</td>
+      <td className="lwp-num">{r?.maxLength != null && Number.isFinite(r.maxLength) ? r.maxLength.toFixed(1) : "—"}<FixMenu linkId={id} /></td>
       <td className="lwp-num lwp-cell-ratio lwp-sticky-ratio">{percentValue(r?.ratio)}</td>
       <td className="lwp-sticky-status">{r ? <StatusBadge status={r.status} /> : '—'}</td>
     </tr>

@@ -1,0 +1,157 @@
+// One-click fixes for a failing circuit: a button per fix in the details panel (FixList), and a
+// compact menu of the same buttons in the schedule row (FixMenu). Each click is one undoable edit.
+
+import { useEffect, useId, useLayoutEffect, useRef, useState } from 'react';
+import { CAUTION, type CircuitResult, type Fix } from '../../../../engine/index.js';
+import { selectResult, useEditor } from '../../store/index.js';
+import { STATUS_LOOK } from '../format.js';
+import { applyFix, planFix } from './apply.js';
+import './fixes.css';
+
+const KIND_WORD: Record<Fix['kind'], string> = {
+  length: 'shorter cable',
+  size: 'larger cable',
+  device: 'smaller or faster device',
+  rcd: 'add an RCD',
+};
+
+/** Fixes are offered where the loop or the voltage check fails, or the circuit relies on an RCD. */
+function needsFix(r: CircuitResult): boolean {
+  return r.status === 'fail' || r.status === 'rcd' || r.voltageStatus === 'fail';
+}
+
+function useLinks() {
+  return useEditor((s) => s.job.links);
+}
+
+function FixButton({ result, fix, onDone, compact }: { result: CircuitResult; fix: Fix; onDone?: () => void; compact?: boolean }) {
+  const links = useLinks();
+  const plan = planFix({ links }, result, fix);
+  if ('error' in plan) return null;
+  return (
+    <button
+      type="button"
+      className={`lwp-button lwf-fix lwf-fix-${fix.kind}`}
+      data-fix={fix.kind}
+      data-fix-link={result.link}
+      title={`${plan.description[0]!.toUpperCase()}${plan.description.slice(1)}. One step: Undo puts it back.`}
+      onClick={(e) => {
+        e.stopPropagation();
+        applyFix(result.link, fix);
+        onDone?.();
+      }}
+    >
+      <span className="lwf-fix-label">{plan.label}</span>
+      {compact ? null : <span className="lwf-fix-kind">{KIND_WORD[fix.kind]}{fix.kind === 'rcd' ? ' (relies on the RCD: not a pass)' : ''}</span>}
+    </button>
+  );
+}
+
+/** The details panel's list of fixes for one circuit (nothing when it needs none). */
+export function FixList({ linkId }: { linkId: string }) {
+  const r = useEditor(selectResult(linkId));
+  if (!r || !needsFix(r)) return null;
+  const look = STATUS_LOOK[r.status === 'pass' ? 'fail' : r.status];
+  return (
+    <section className="lwf-fixes" aria-label={`Fixes for ${linkId}`} data-fixes={linkId}>
+      <h4>
+        <span aria-hidden="true">{look.symbol}</span> Changes that make {linkId} pass
+      </h4>
+      {r.fixes.length === 0 ? (
+        <p className="lwf-none" data-fixes-none>
+          No single change of length, cable size, device or RCD was found that makes it pass.
+        </p>
+      ) : (
+        <>
+          <p className="lwf-lead">Each is one change with everything else as it is; one click applies it (Undo puts it back).</p>
+          <div className="lwf-fix-list">
+            {r.fixes.map((fix, i) => (
+              <FixButton key={`${fix.kind}-${i}`} result={r} fix={fix} />
+            ))}
+          </div>
+        </>
+      )}
+      <p className="lwf-caution">{CAUTION}</p>
+    </section>
+  );
+}
+
+/** The schedule row's compact menu: a "Fix" button that opens the same buttons. */
+export function FixMenu({ linkId }: { linkId: string }) {
+  const r = useEditor(selectResult(linkId));
+  const [open, setOpen] = useState(false);
+  const [at, setAt] = useState<{ left: number; top: number } | null>(null);
+  const button = useRef<HTMLButtonElement>(null);
+  const menu = useRef<HTMLDivElement>(null);
+  const menuId = useId();
+  const count = r && needsFix(r) ? r.fixes.length : 0;
+
+  useLayoutEffect(() => {
+    if (!open || !button.current) return;
+    const rect = button.current.getBoundingClientRect();
+    setAt({ left: Math.max(4, rect.right - 260), top: rect.bottom + 2 });
+  }, [open]);
+
+  useEffect(() => {
+    if (!open) return;
+    const close = (e: Event) => {
+      const t = e.target as Node | null;
+      if (t && (menu.current?.contains(t) || button.current?.contains(t))) return;
+      setOpen(false);
+    };
+    window.addEventListener('pointerdown', close, true);
+    return () => window.removeEventListener('pointerdown', close, true);
+  }, [open]);
+
+  useEffect(() => {
+    if (open) menu.current?.querySelector<HTMLButtonElement>('button')?.focus();
+  }, [open, at]);
+
+  if (!r || count === 0) return null;
+  const finish = () => {
+    setOpen(false);
+    button.current?.focus();
+  };
+  return (
+    <span className="lwf-menu-wrap">
+      <button
+        ref={button}
+        type="button"
+        className="lwp-button lwf-menu-button"
+        data-fix-menu={linkId}
+        aria-haspopup="menu"
+        aria-expanded={open}
+        aria-controls={open ? menuId : undefined}
+        title={`${count} change${count === 1 ? '' : 's'} that make ${linkId} pass`}
+        onClick={(e) => {
+          e.stopPropagation();
+          setOpen((o) => !o);
+        }}
+      >
+        Fix ({count}) <span aria-hidden="true">▾</span>
+      </button>
+      {open ? (
+        <div
+          ref={menu}
+          id={menuId}
+          role="menu"
+          aria-label={`Fixes for ${linkId}`}
+          className="lwf-menu"
+          data-fix-menu-list={linkId}
+          style={at ? { left: at.left, top: at.top } : undefined}
+          onClick={(e) => e.stopPropagation()}
+          onKeyDown={(e) => {
+            if (e.key === 'Escape') {
+              e.stopPropagation();
+              finish();
+            }
+          }}
+        >
+          {r.fixes.map((fix, i) => (
+            <FixButton key={`${fix.kind}-${i}`} result={r} fix={fix} onDone={finish} />
+          ))}
+        </div>
+      ) : null}
+    </span>
+  );
+}

@@ -1,0 +1,329 @@
+// The schedule made for testing on site: one row per circuit with its test limit, the reading
+// (Zs, temperature, date, instrument) typed in place, and the measured result. Quick with the
+// keyboard: Enter (or ↓) goes to the same cell of the next row, Shift+Enter (or ↑) the row above,
+// Tab and Shift+Tab the next and previous cell. Every committed cell is one undoable edit.
+
+import { memo, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { CAUTION, resolveRules, type LinkReading } from '../../../../engine/index.js';
+import { runCommand } from '../../commands/context.js';
+import { selectLink, selectResult, useEditor } from '../../store/index.js';
+import { editLink } from '../actions.js';
+import { StatusBadge } from '../details/CircuitResults.js';
+import { parseNumber, showNumber, type NumberRule } from '../fields/parse.js';
+import type { Outcome } from '../fields/fields.js';
+import { STATUS_LOOK, ohmsValue, percentValue } from '../format.js';
+import { readingChange, READING_FIELDS, type ReadingField } from './readings.js';
+import { useTestingView, type ScheduleView } from './view.js';
+import './testing.css';
+
+const RULES: Record<'zs' | 'temperature', NumberRule> = {
+  zs: { label: 'Zs', unit: 'Ω', above: 0, optional: true },
+  temperature: { label: 'Temperature', unit: '°C', min: -30, max: 60, optional: true },
+};
+
+const FIELD_WORD: Record<ReadingField, string> = { zs: 'reading Zs', temperature: 'temperature', date: 'date', instrument: 'instrument' };
+
+/** Design schedule or testing view: the two buttons at the head of either. */
+export function ScheduleViewSwitch() {
+  const view = useTestingView((s) => s.view);
+  const choose = (v: ScheduleView) => useTestingView.getState().setView(v);
+  return (
+    <div className="lwt-switch" role="group" aria-label="Schedule view">
+      <button type="button" className={`lwp-button${view === 'design' ? ' lwt-on' : ''}`} aria-pressed={view === 'design'}
+        data-schedule-view="design" onClick={() => choose('design')}>Design</button>
+      <button type="button" className={`lwp-button${view === 'testing' ? ' lwt-on' : ''}`} aria-pressed={view === 'testing'}
+        data-schedule-view="testing" onClick={() => choose('testing')}>Testing</button>
+    </div>
+  );
+}
+
+function cellSelector(row: number, col: number): string {
+  return `[data-tcell="${row}:${col}"]`;
+}
+
+/** Moves the focus to another cell of the grid; false when there is none there. */
+function focusCell(from: HTMLElement, row: number, col: number): boolean {
+  const grid = from.closest('[data-testing-grid]');
+  const target = grid?.querySelector<HTMLInputElement>(cellSelector(row, col));
+  if (!target) return false;
+  target.focus();
+  target.select();
+  return true;
+}
+
+interface CellProps {
+  row: number;
+  col: number;
+  link: string;
+  field: ReadingField;
+  shown: string;
+  placeholder?: string;
+  /** What the cell shows is typed ahead of the Zs (kept, not yet in the job). */
+  draft?: boolean;
+  commit(text: string): Outcome;
+}
+
+/** One input of the grid: local text, committed on Enter, Tab, arrows or leaving it. */
+function Cell({ row, col, link, field, shown, placeholder, draft, commit }: CellProps) {
+  const [text, setText] = useState(shown);
+  const [error, setError] = useState<string | null>(null);
+  // The text last committed (or refused), so the blur that follows a keyboard move does not commit it again.
+  const tried = useRef<string | null>(null);
+  useEffect(() => {
+    setText(shown);
+    setError(null);
+    tried.current = null;
+  }, [shown]);
+
+  const run = (): boolean => {
+    if (text === shown || text === tried.current) return error === null;
+    tried.current = text;
+    const outcome = commit(text);
+    if (outcome.ok) {
+      setError(null);
+      return true;
+    }
+    setError(outcome.reason);
+    setText(shown);
+    return false;
+  };
+
+  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
+    const el = e.currentTarget;
+    let to: [number, number] | null = null;
+    if (e.key === 'Enter' || e.key === 'ArrowDown' || e.key === 'ArrowUp') {
+      const up = e.key === 'ArrowUp' || (e.key === 'Enter' && e.shiftKey);
+      to = [row + (up ? -1 : 1), col];
+    } else if (e.key === 'Tab') {
+      const last = READING_FIELDS.length - 1;
+      to = e.shiftKey ? (col > 0 ? [row, col - 1] : [row - 1, last]) : col < last ? [row, col + 1] : [row + 1, 0];
+    } else if (e.key === 'Escape') {
+      setText(shown);
+      setError(null);
+      return;
+    } else return;
+    const ok = run();
+    if (!ok) {
+      e.preventDefault(); // stay on the refused cell, its reason beside it
+      return;
+    }
+    if (focusCell(el, to[0], to[1])) e.preventDefault();
+    else if (e.key === 'Enter') e.preventDefault();
+  };
+
+  const label = `${FIELD_WORD[field]} of ${link}`;
+  return (
+    <span className="lwt-cell-wrap">
+      <input
+        type="text"
+        inputMode={field === 'zs' || field === 'temperature' ? 'decimal' : 'text'}
+        className={`lwp-input lwt-input lwt-input-${field}${draft ? ' lwt-draft' : ''}`}
+        aria-label={field === 'zs' ? `${label} (Ω)` : field === 'temperature' ? `${label} (°C)` : label}
+        aria-invalid={error ? true : undefined}
+        title={draft ? 'Kept for this row; recorded with the reading when its Zs is entered' : undefined}
+        data-tcell={`${row}:${col}`}
+        data-testing-cell={field}
+        data-testing-link={link}
+        value={text}
+        placeholder={placeholder}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={() => void run()}
+        onKeyDown={onKeyDown}
+      />
+      {error ? (
+        <span className="lwp-field-error lwt-error" role="alert" data-testing-error={`${link}:${field}`}>
+          {error}
+        </span>
+      ) : null}
+    </span>
+  );
+}
+
+/** Commits one cell of a link's reading through the store (one undoable edit), or keeps a draft. */
+function commitReading(link: string, field: ReadingField, text: string): Outcome {
+  let value: number | string | undefined;
+  if (field === 'zs' || field === 'temperature') {
+    const parsed = parseNumber(text, RULES[field]);
+    if (!parsed.ok) return { ok: false, reason: parsed.reason };
+    value = parsed.value;
+  } else {
+    value = text.trim() === '' ? undefined : text.trim();
+  }
+  const record = useEditor.getState().job.links.find((l) => l.id === link);
+  if (!record) return { ok: false, reason: `There is no link ${link} any more` };
+  const view = useTestingView.getState();
+  const change = readingChange(record.measured, field, value, view.session, view.drafts[link]);
+  switch (change.kind) {
+    case 'none':
+      return { ok: true };
+    case 'draft':
+      view.setDraft(link, change.draft);
+      return { ok: true };
+    case 'reading': {
+      const label = change.measured === undefined ? `remove the reading of ${link}` : `reading of ${link}: ${FIELD_WORD[field]}`;
+      const outcome = editLink(link, 'measured', change.measured, label);
+      if (outcome.ok && record.measured === undefined) view.setDraft(link, undefined);
+      if (outcome.ok && change.measured === undefined) {
+        useEditor.getState().setMessage({ kind: 'info', text: `Removed the reading of ${link} (Undo puts it back)` });
+      }
+      return outcome;
+    }
+  }
+}
+
+function shownOf(reading: LinkReading | undefined, field: ReadingField, extras: Record<string, unknown> | undefined): { text: string; draft: boolean } {
+  const own = reading?.[field];
+  if (own !== undefined) return { text: typeof own === 'number' ? showNumber(own) : own, draft: false };
+  const typed = reading ? undefined : extras?.[field];
+  if (typed !== undefined) return { text: typeof typed === 'number' ? showNumber(typed) : String(typed), draft: true };
+  return { text: '', draft: false };
+}
+
+const TestingRow = memo(function TestingRow({ id, row, fixedFactor }: { id: string; row: number; fixedFactor: boolean }) {
+  const link = useEditor(selectLink(id));
+  const r = useEditor(selectResult(id));
+  const draft = useTestingView((s) => s.drafts[id]);
+  const session = useTestingView((s) => s.session);
+  if (!link) return null;
+  const m = r?.measured ?? null;
+  const reading = link.measured;
+  const temperature = reading?.temperature ?? 20;
+  const cell = (field: ReadingField, col: number, placeholder?: string) => {
+    const { text, draft: isDraft } = shownOf(reading, field, draft);
+    return (
+      <td className={`lwt-cell lwt-cell-${field}`}>
+        <Cell row={row} col={col} link={id} field={field} shown={text} draft={isDraft} placeholder={placeholder}
+          commit={(t) => commitReading(id, field, t)} />
+      </td>
+    );
+  };
+  const sessionTemp = session.temperature !== undefined ? showNumber(session.temperature) : '20';
+  return (
+    <tr className="lwp-row lwt-row" data-testing-row={id}>
+      <th scope="row" className="lwt-circuit" title={link.name ? `${id} — ${link.name}` : id}>
+        <span className="lwt-id">{id}</span>
+        {link.name ? <span className="lwt-name">{link.name}</span> : null}
+      </th>
+      <td className="lwp-num lwt-limit" data-testing-limit={id}>
+        {ohmsValue(r?.testLimit)}
+        {r?.testLimit != null ? (
+          <span className="lwp-sub"> {fixedFactor ? 'fixed factor' : `at ${showNumber(temperature)} °C`}</span>
+        ) : null}
+      </td>
+      {cell('zs', 0, 'Zs')}
+      {cell('temperature', 1, reading ? '20' : sessionTemp)}
+      {cell('date', 2, reading ? '' : session.date ?? '')}
+      {cell('instrument', 3, reading ? '' : session.instrument ?? '')}
+      <td className="lwp-num" data-testing-corrected={id}>{m ? ohmsValue(m.corrected) : '—'}</td>
+      <td className="lwp-num" data-testing-ratio={id}>{m ? percentValue(m.ratio) : '—'}</td>
+      <td className="lwt-status" data-testing-status={id}>
+        {m ? <StatusBadge status={m.status} /> : reading ? <span className="lwp-muted">result to come</span> : <span className="lwp-muted">no reading</span>}
+      </td>
+    </tr>
+  );
+});
+
+/** The day's defaults for new readings. */
+function SessionDefaults() {
+  const session = useTestingView((s) => s.session);
+  const [error, setError] = useState<string | null>(null);
+  const set = useTestingView.getState().setSession;
+  return (
+    <fieldset className="lwt-session" aria-label="For new readings">
+      <legend>For new readings</legend>
+      <label>
+        Temperature
+        <input className="lwp-input lwt-session-input" data-testing-session="temperature" inputMode="decimal"
+          defaultValue={showNumber(session.temperature)} placeholder="20" aria-label="Temperature of new readings (°C)"
+          onBlur={(e) => {
+            const parsed = parseNumber(e.currentTarget.value, RULES.temperature);
+            if (!parsed.ok) {
+              setError(parsed.reason);
+              return;
+            }
+            setError(null);
+            set({ temperature: parsed.value });
+          }} /> °C
+      </label>
+      <label>
+        Date
+        <input className="lwp-input lwt-session-input" data-testing-session="date" defaultValue={session.date ?? ''}
+          placeholder="e.g. 2026-12-02" aria-label="Date of new readings"
+          onBlur={(e) => set({ date: e.currentTarget.value.trim() || undefined })} />
+      </label>
+      <label>
+        Instrument
+        <input className="lwp-input lwt-session-input" data-testing-session="instrument" defaultValue={session.instrument ?? ''}
+          aria-label="Instrument of new readings" onBlur={(e) => set({ instrument: e.currentTarget.value.trim() || undefined })} />
+      </label>
+      {error ? <span className="lwp-field-error" role="alert">{error}</span> : null}
+    </fieldset>
+  );
+}
+
+export function TestingView() {
+  const links = useEditor((s) => s.job.links);
+  const rulesInput = useEditor((s) => s.job.rules);
+  const counts = useEditor((s) => s.results.summary.checks.measured);
+  const fixedFactor = useMemo(() => resolveRules(rulesInput).measuredRule.value === 'fixed-factor', [rulesInput]);
+  const withReading = links.filter((l) => l.measured !== undefined).length;
+  return (
+    <section className="lwp-panel lwp-schedule lwt-testing" data-panel="testing" aria-label="Testing: readings on site">
+      <header className="lwp-panel-head">
+        <h2 className="lwp-panel-title">Testing</h2>
+        <ScheduleViewSwitch />
+        <p className="lwt-counts" data-testing-counts>
+          {withReading} of {links.length} with a reading
+          {(['fail', 'rcd', 'pass', 'unchecked'] as const).map((k) =>
+            counts[k] > 0 ? (
+              <span key={k} className={`lwp-status ${STATUS_LOOK[k].className}`}>
+                <span aria-hidden="true">{STATUS_LOOK[k].symbol}</span> {counts[k]} {STATUS_LOOK[k].word}
+              </span>
+            ) : null,
+          )}
+        </p>
+        <button type="button" className="lwp-button" data-action="import-readings" onClick={() => runCommand('readings.import')}>
+          Import readings…
+        </button>
+      </header>
+      <SessionDefaults />
+      <div className="lwp-schedule-body" data-testing-grid>
+        <table className="lwp-schedule-table lwt-table">
+          <thead>
+            <tr>
+              <th scope="col">Circuit</th>
+              <th scope="col" className="lwp-num-head" title={fixedFactor
+                ? 'The largest reading that passes (the limit times the fixed factor of the rules)'
+                : 'The largest reading that passes at the temperature of the reading (20 °C when none is given)'}>
+                Test limit <span className="lwp-col-unit">Ω</span>
+              </th>
+              <th scope="col">Reading Zs <span className="lwp-col-unit">Ω</span></th>
+              <th scope="col">Temperature <span className="lwp-col-unit">°C</span></th>
+              <th scope="col">Date</th>
+              <th scope="col">Instrument</th>
+              <th scope="col" className="lwp-num-head" title="The reading corrected to the conductors at fault temperature">
+                Corrected <span className="lwp-col-unit">Ω</span>
+              </th>
+              <th scope="col" className="lwp-num-head" title="Corrected reading as a share of the loop limit">
+                Ratio <span className="lwp-col-unit">%</span>
+              </th>
+              <th scope="col">Result</th>
+            </tr>
+          </thead>
+          <tbody>
+            {links.map((l, i) => (
+              <TestingRow key={l.id} id={l.id} row={i} fixedFactor={fixedFactor} />
+            ))}
+          </tbody>
+        </table>
+        {links.length === 0 ? <p className="lwp-empty">No circuits yet: connect two nodes on the sheet.</p> : null}
+        <p className="lwt-help">
+          Enter or ↓: the same cell of the next circuit; Shift+Enter or ↑: the one above; Tab: the next cell.
+          An empty Zs removes the reading. {fixedFactor ? 'Readings are judged by the fixed factor of the rules.' : 'Readings are corrected from their temperature to fault temperature.'}{' '}
+          A circuit without a protective device has no test limit (—).
+        </p>
+        <p className="lwt-caution" data-caution>{CAUTION}</p>
+      </div>
+    </section>
+  );
+}
