@@ -136,7 +136,7 @@ export function jobArb(opts: TreeOptions = {}): fc.Arbitrary<Obj> {
       })
       .map(({ rules, source, nodes, links, extra }) => ({
         format: 'loopwright.job',
-        version: 1,
+        version: 2,
         job: { ...DETAILS },
         rules,
         nodes: [{ id: 'N0', kind: 'supply', source }, ...nodes],

@@ -142,7 +142,7 @@ describe('unknown top-level keys', () => {
     expect(back.futureThing).toEqual({ a: [1, 2, { b: 'c' }] });
     expect(back.viewer).toBe('x');
     expect(back.format).toBe('loopwright.job');
-    expect(back.version).toBe(1);
+    expect(back.version).toBe(2);
     // 2-space JSON
     expect(saved).toBe(`${JSON.stringify(back, null, 2)}\n`);
   });

@@ -86,7 +86,7 @@ describe('the file as a whole', () => {
   });
 
   it('a newer version is refused, saying so, and nothing is read', () => {
-    const result = parseJob(JSON.stringify(withValue('version', 2)));
+    const result = parseJob(JSON.stringify(withValue('version', 3)));
     expect(result.ok).toBe(false);
     if (result.ok) return;
     const text = result.problems.map(formatProblem).join(' ');

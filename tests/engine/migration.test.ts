@@ -1,6 +1,6 @@
-// Loading goes through the migration chain (engine/model/migrations.ts). Version 1 is the only
-// version today, so the chain is empty; these tests pin what the loader does with versions
-// and exercise the chain mechanics with a chain of our own.
+// Loading goes through the migration chain (engine/model/migrations.ts). Version 2 adds only
+// optional fields, so the one step v1 → v2 changes the version alone; these tests pin it with a
+// before/after fixture pair and exercise the chain mechanics with a chain of our own.
 
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -17,10 +17,10 @@ describe('the v1 fixture pair', () => {
   const expected = JSON.parse(fixture('v1-minimal.expected.json')) as unknown;
   const loaded = parseJob(text);
 
-  it('loads through the chain with nothing to migrate', () => {
+  it('loads through the chain, migrated from version 1', () => {
     expect(loaded.ok).toBe(true);
     if (!loaded.ok) return;
-    expect(loaded.migratedFrom).toBeNull();
+    expect(loaded.migratedFrom).toBe(1);
     expect(loaded.job.version).toBe(CURRENT_VERSION);
   });
 
@@ -79,7 +79,9 @@ describe('the chain', () => {
     for (const m of MIGRATIONS) expect(m.to).toBe(m.from + 1);
     const r = migrate({ version: 1 }, 1, CURRENT_VERSION);
     expect(r.ok).toBe(true);
-    if (r.ok) expect(r.migratedFrom).toBeNull();
+    if (r.ok) expect(r.migratedFrom).toBe(1);
+    const same = migrate({ version: CURRENT_VERSION }, CURRENT_VERSION, CURRENT_VERSION);
+    if (same.ok) expect(same.migratedFrom).toBeNull();
   });
 
   // A chain of our own: v1 → v2 renames a field, v2 → v3 adds one.

@@ -26,6 +26,24 @@ const CIRCUIT_FIELDS = [
   'maxLength',
   'status',
   'notes',
+  // version 2 (job-format.md "Results document, version 2")
+  'phases',
+  'designCurrent',
+  'powerFactor',
+  'voltageDrop',
+  'voltageDropTotal',
+  'voltageDropLimit',
+  'voltageStatus',
+  'capacity',
+  'capacityStatus',
+  'faultLevel',
+  'breakingStatus',
+  'earthMinArea',
+  'withstandStatus',
+  'testLimit',
+  'measured',
+  'fixes',
+  'verdict',
 ];
 
 // The example job of job-format.md, verbatim.
@@ -60,7 +78,7 @@ describe('the format’s own example', () => {
 
   it('reproduces the published example results', () => {
     expect(results.format).toBe('loopwright.results');
-    expect(results.version).toBe(1);
+    expect(results.version).toBe(2); // version 2: the fields of method-depth.md added
     expect(results.basis).toBe('au-nz');
     const c = circuit(results, 'C1');
     // own: 0.0225·32·(2/2.5) = 0.576, X = 2·0.00008·32 = 0.00512 → 0.5760228
@@ -89,14 +107,15 @@ describe('the format’s own example', () => {
     expectRel(c.ratio, 0.46958377, 1e-6);
     expectRel(c.maxLength, 68.145456, 1e-6);
     expect(results.worst).toEqual({ link: 'C1', ratio: c.ratio, path: ['S1', 'M1', 'MSB', 'C1', 'P1'] });
-    expect(results.summary).toEqual({ pass: 1, fail: 0, rcd: 0, unchecked: 1 });
+    expect(results.summary).toMatchObject({ pass: 1, fail: 0, rcd: 0, unchecked: 1 });
   });
 
   it('has exactly the documented fields, top level and per circuit', () => {
-    expect(Object.keys(results).sort()).toEqual(['basis', 'circuits', 'format', 'summary', 'version', 'worst']);
+    expect(Object.keys(results).sort()).toEqual(['basis', 'circuits', 'format', 'summary', 'supplies', 'version', 'worst']);
     for (const c of results.circuits) expect(Object.keys(c).sort()).toEqual([...CIRCUIT_FIELDS].sort());
     expect(Object.keys(results.worst ?? {}).sort()).toEqual(['link', 'path', 'ratio']);
-    expect(Object.keys(results.summary).sort()).toEqual(['fail', 'pass', 'rcd', 'unchecked']);
+    expect(Object.keys(results.summary).sort()).toEqual(['checks', 'fail', 'pass', 'rcd', 'unchecked', 'verdict']);
+    expect(Object.keys(results.summary.checks).sort()).toEqual(['breaking', 'capacity', 'measured', 'voltage', 'withstand']);
   });
 
   it('is plain JSON: it survives a JSON round trip unchanged', () => {
