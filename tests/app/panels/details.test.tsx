@@ -161,30 +161,37 @@ describe('details panel for a link', () => {
     expect('requiredTime' in linkOf('C1')).toBe(false);
   });
 
-  it('switches between the four device kinds and no device, keeping the rating', () => {
+  it('switches between the four device kinds and no device; a new kind starts empty until its data is entered', () => {
     const { container } = render(<DetailsPanel />);
     selectLink('C1');
     choose(field<HTMLSelectElement>(container, 'device.type'), 'adjustable');
-    expect(linkOf('C1').device).toMatchObject({ type: 'adjustable', rating: 20, tolerance: 0.2 });
-    expect(field(container, 'device.instantaneous').value).toBe('200');
+    // Nothing made up: the old device leaves the job and the new one's fields are empty.
+    expect(linkOf('C1').device).toBeUndefined();
+    expect(field(container, 'device.instantaneous').value).toBe('');
     expect(container.querySelector('[data-field="device.curve"]')).toBeNull();
+    typeAndEnter(field(container, 'device.rating'), '20');
+    typeAndEnter(field(container, 'device.instantaneous'), '200');
+    expect(linkOf('C1').device).toEqual({ type: 'adjustable', rating: 20, instantaneous: 200 });
 
     choose(field<HTMLSelectElement>(container, 'device.type'), 'fixed');
-    expect(linkOf('C1').device).toMatchObject({ type: 'fixed', rating: 20 });
+    expect(linkOf('C1').device).toBeUndefined();
+    typeAndEnter(field(container, 'device.rating'), '20');
     typeAndEnter(field(container, 'device.tripCurrent'), '150');
     expect(linkOf('C1').device).toMatchObject({ type: 'fixed', tripCurrent: 150 });
     // A trip current of 150 A is the same as C20 under au-nz (7.5 × 20 A), so the result matches.
     expect(useEditor.getState().resultById.C1!.tripCurrent).toBe(150);
 
     choose(field<HTMLSelectElement>(container, 'device.type'), 'curve');
-    expect(linkOf('C1').device?.type).toBe('curve');
-    expect(container.querySelectorAll('[data-curve-row]').length).toBe(3);
+    expect(linkOf('C1').device).toBeUndefined();
+    expect(container.querySelectorAll('[data-curve-row]').length).toBe(2);
 
     choose(field<HTMLSelectElement>(container, 'device.type'), 'none');
     expect(linkOf('C1').device).toBeUndefined();
     expect(useEditor.getState().resultById.C1!.status).toBe('unchecked');
 
     choose(field<HTMLSelectElement>(container, 'device.type'), 'mcb');
+    choose(field<HTMLSelectElement>(container, 'device.curve'), 'C');
+    typeAndEnter(field(container, 'device.rating'), '20');
     expect(linkOf('C1').device).toEqual({ type: 'mcb', curve: 'C', rating: 20 });
     choose(field<HTMLSelectElement>(container, 'device.curve'), 'B');
     expect(linkOf('C1').device).toEqual({ type: 'mcb', curve: 'B', rating: 20 });

@@ -1,10 +1,18 @@
 // The protective device of a link: none, or one of the four kinds of the job format, with
-// breaking capacity and label; and the RCD (sensitivity shown in mA, stored in A).
+// breaking capacity, let-through and label; and the RCD (sensitivity shown in mA, stored in A).
+//
+// A kind change never fills in trip data: the old device leaves the job and the new one is a
+// draft (panels/devices/drafts.ts) until every required value is entered or a device is picked
+// from the library; meanwhile the circuit is unchecked and the form says what is missing.
 
-import type { Curve, Device, DeviceType, Link } from '../../../../engine/index.js';
+import { deviceMark, type Curve, type Device, type DeviceType, type Link } from '../../../../engine/index.js';
 import { editLink } from '../actions.js';
 import { CheckField, NumberField, SelectField, TextField } from '../fields/fields.js';
 import { CurvePoints } from './CurvePoints.js';
+import { DevicePicker, SaveMyDevice } from '../devices/DevicePicker.js';
+import '../devices/devices.css';
+import { DraftCurvePoints } from '../devices/DraftCurvePoints.js';
+import { changeKind, editDraft, missingData, useDrafts, type DeviceDraft } from '../devices/drafts.js';
 
 type Kind = DeviceType | 'none';
 
@@ -22,72 +30,114 @@ const CURVE_OPTIONS: ReadonlyArray<{ value: Curve; label: string }> = [
   { value: 'D', label: 'D' },
 ];
 
-/**
- * A device of another kind that keeps what the kinds share (rating, breaking, label).
- * The kind's own values start from the old device where it had them, else from a starting
- * value the designer is expected to replace (shown in the form straight away).
- */
-export function deviceOfKind(kind: DeviceType, old: Device | undefined): Device {
-  const rating = old?.rating ?? 20;
-  const shared = {
-    rating,
-    ...(old?.breaking !== undefined ? { breaking: old.breaking } : {}),
-    ...(old?.label !== undefined ? { label: old.label } : {}),
-  };
-  switch (kind) {
-    case 'mcb':
-      return { type: 'mcb', curve: old?.type === 'mcb' ? old.curve : 'C', ...shared };
-    case 'adjustable':
-      // Instantaneous pick-up at 10 × In is a usual factory setting (common practice).
-      return { type: 'adjustable', ...shared, instantaneous: 10 * rating, tolerance: 0.2 };
-    case 'curve':
-      return { type: 'curve', ...shared, points: [[2 * rating, 100], [5 * rating, 5], [20 * rating, 0.1]] };
-    case 'fixed':
-      return { type: 'fixed', ...shared, tripCurrent: 5 * rating };
-  }
-}
+const DRAFT_CURVE_OPTIONS: ReadonlyArray<{ value: Curve | ''; label: string }> = [
+  { value: '', label: 'choose…' },
+  ...CURVE_OPTIONS,
+];
+
+const LET_THROUGH_HINT = "the maker's published I²t; caps the energy in the earth withstand check";
 
 export function DeviceEditor({ link }: { link: Link }) {
   const id = link.id;
   const device = link.device;
-  const kind: Kind = device?.type ?? 'none';
+  const stored = useDrafts((s) => s.drafts[id]);
+  const draft = device ? undefined : stored;
+  const kind: Kind = device?.type ?? draft?.type ?? 'none';
   const set = (field: string) => (v: unknown) => editLink(id, field, v);
 
   return (
     <fieldset className="lwp-group" data-group="device">
       <legend>Protective device</legend>
       <SelectField field="device.type" label="Kind" value={kind} options={KIND_OPTIONS}
-        onCommit={(k) => editLink(id, 'device', k === 'none' ? undefined : deviceOfKind(k, device), `change the device of ${id}`)} />
+        onCommit={(k) => changeKind(id, k, device ? deviceMark(device) : undefined)} />
       {device ? (
-        <>
-          {device.type === 'mcb' ? (
-            <SelectField field="device.curve" label="Curve" value={device.curve} options={CURVE_OPTIONS}
-              onCommit={set('device.curve')} />
-          ) : null}
-          <NumberField field="device.rating" label="Rating In" unit="A" value={device.rating} above={0}
-            onCommit={set('device.rating')} />
-          {device.type === 'adjustable' ? (
-            <>
-              <NumberField field="device.instantaneous" label="Instantaneous pick-up Ii" unit="A"
-                value={device.instantaneous} above={0} onCommit={set('device.instantaneous')} />
-              <NumberField field="device.tolerance" label="Tolerance τ" value={device.tolerance} min={0} optional
-                placeholder="0.2" hint="fraction: Ia = Ii × (1 + τ)" onCommit={set('device.tolerance')} />
-            </>
-          ) : null}
-          {device.type === 'fixed' ? (
-            <NumberField field="device.tripCurrent" label="Trip current Ia" unit="A" value={device.tripCurrent}
-              above={0} onCommit={set('device.tripCurrent')} />
-          ) : null}
-          {device.type === 'curve' ? <CurvePoints linkId={id} device={device} /> : null}
-          <NumberField field="device.breaking" label="Breaking capacity" unit="kA" value={device.breaking}
-            above={0} optional onCommit={set('device.breaking')} />
-          <TextField field="device.label" label="Label" value={device.label} placeholder="shown instead of the mark"
-            onCommit={set('device.label')} />
-        </>
+        <DeviceFields id={id} device={device} set={set} />
+      ) : draft ? (
+        <DraftFields id={id} draft={draft} />
       ) : (
         <p className="lwp-hint">Without a device this link still adds impedance, and its own check is unchecked.</p>
       )}
+      <DevicePicker linkId={id} kind={kind} />
+      {device ? <SaveMyDevice device={device} /> : null}
     </fieldset>
+  );
+}
+
+function DeviceFields({ id, device, set }: { id: string; device: Device; set: (field: string) => (v: unknown) => ReturnType<typeof editLink> }) {
+  return (
+    <>
+      {device.type === 'mcb' ? (
+        <SelectField field="device.curve" label="Curve" value={device.curve} options={CURVE_OPTIONS}
+          onCommit={set('device.curve')} />
+      ) : null}
+      <NumberField field="device.rating" label="Rating In" unit="A" value={device.rating} above={0}
+        onCommit={set('device.rating')} />
+      {device.type === 'adjustable' ? (
+        <>
+          <NumberField field="device.instantaneous" label="Instantaneous pick-up Ii" unit="A"
+            value={device.instantaneous} above={0} onCommit={set('device.instantaneous')} />
+          <NumberField field="device.tolerance" label="Tolerance τ" value={device.tolerance} min={0} optional
+            placeholder="0.2" hint="fraction: Ia = Ii × (1 + τ)" onCommit={set('device.tolerance')} />
+        </>
+      ) : null}
+      {device.type === 'fixed' ? (
+        <NumberField field="device.tripCurrent" label="Trip current Ia" unit="A" value={device.tripCurrent}
+          above={0} onCommit={set('device.tripCurrent')} />
+      ) : null}
+      {device.type === 'curve' ? <CurvePoints linkId={id} device={device} /> : null}
+      <NumberField field="device.breaking" label="Breaking capacity" unit="kA" value={device.breaking}
+        above={0} optional onCommit={set('device.breaking')} />
+      <NumberField field="device.letThrough" label="Let-through I²t" unit="A²s" value={device.letThrough}
+        above={0} optional hint={LET_THROUGH_HINT} onCommit={set('device.letThrough')} />
+      <TextField field="device.label" label="Label" value={device.label} placeholder="shown instead of the mark"
+        onCommit={set('device.label')} />
+    </>
+  );
+}
+
+/** The form of a device still being entered: the same fields, empty until the designer fills them. */
+function DraftFields({ id, draft }: { id: string; draft: DeviceDraft }) {
+  const put = (key: keyof DeviceDraft) => (v: unknown) => editDraft(id, { [key]: v } as Partial<DeviceDraft>);
+  const missing = missingData(draft);
+  return (
+    <>
+      <div className="lwd-missing" role="status" data-device-missing={id}>
+        <span aria-hidden="true" className="lwd-missing-symbol">?</span>{' '}
+        <strong>Device data missing:</strong> {missing.map((m) => m.words).join(', ')}.
+        <span className="lwd-missing-more">
+          {' '}Until it is entered, or a device is picked below, this link has no device in the job and its circuit is unchecked
+          {draft.replaces ? `; nothing is taken over from the ${draft.replaces} it replaces` : ''}.
+        </span>
+      </div>
+      {draft.type === 'mcb' ? (
+        <SelectField field="device.curve" label="Curve" value={draft.curve ?? ''} options={DRAFT_CURVE_OPTIONS}
+          onCommit={(c) => editDraft(id, { curve: c === '' ? undefined : c })} />
+      ) : null}
+      <NumberField field="device.rating" label="Rating In" unit="A" value={draft.rating} above={0} optional
+        placeholder="required" onCommit={put('rating')} />
+      {draft.type === 'adjustable' ? (
+        <>
+          <NumberField field="device.instantaneous" label="Instantaneous pick-up Ii" unit="A" value={draft.instantaneous}
+            above={0} optional placeholder="required" onCommit={put('instantaneous')} />
+          <NumberField field="device.tolerance" label="Tolerance τ" value={draft.tolerance} min={0} max={0.99} optional
+            placeholder="0.2" hint="fraction: Ia = Ii × (1 + τ)" onCommit={put('tolerance')} />
+        </>
+      ) : null}
+      {draft.type === 'fixed' ? (
+        <NumberField field="device.tripCurrent" label="Trip current Ia" unit="A" value={draft.tripCurrent}
+          above={0} optional placeholder="required" onCommit={put('tripCurrent')} />
+      ) : null}
+      {draft.type === 'curve' ? <DraftCurvePoints linkId={id} draft={draft} /> : null}
+      <NumberField field="device.breaking" label="Breaking capacity" unit="kA" value={draft.breaking}
+        above={0} optional onCommit={put('breaking')} />
+      <NumberField field="device.letThrough" label="Let-through I²t" unit="A²s" value={draft.letThrough}
+        above={0} optional hint={LET_THROUGH_HINT} onCommit={put('letThrough')} />
+      <TextField field="device.label" label="Label" value={draft.label} placeholder="shown instead of the mark"
+        onCommit={put('label')} />
+      {draft.refused ? (
+        <p className="lwp-field-error" role="alert" data-device-refused={id}>Not taken into the job: {draft.refused}</p>
+      ) : null}
+    </>
   );
 }
 
