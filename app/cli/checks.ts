@@ -92,8 +92,8 @@ export function summaryLines(results: Results): string[] {
   return [
     `Loop: ${summaryLine(s)}`,
     `Verdict (every check): ${summaryLine(s.verdict)}`,
-    `Checks: voltage drop ${checkCountsLine(k.voltage)}; capacity ${checkCountsLine(k.capacity)}; ` +
-      `breaking ${checkCountsLine(k.breaking)}; withstand ${checkCountsLine(k.withstand)}; ` +
-      (readings === 0 ? 'measured: no readings' : `measured ${summaryLine(k.measured)} (of ${readings} reading${readings === 1 ? '' : 's'})`),
+    `Checks: voltage drop ${checkCountsLine(k.voltage)}; capacity ${checkCountsLine(k.capacity)};`,
+    `        breaking ${checkCountsLine(k.breaking)}; withstand ${checkCountsLine(k.withstand)};`,
+    `        ${readings === 0 ? 'measured: no readings' : `measured ${summaryLine(k.measured)} (of ${readings} reading${readings === 1 ? '' : 's'})`}`,
   ];
 }

@@ -158,7 +158,7 @@ export function otherFailures(c: CircuitResult): string[] {
 export function verdictNote(c: CircuitResult): string | null {
   const others = otherFailures(c);
   if (c.verdict === c.status && others.length === 0) return null;
-  const loop = c.status === 'fail' || c.status === 'rcd' ? ['loop'] : [];
+  const loop = c.status === 'fail' ? ['loop'] : c.status === 'rcd' ? ['loop (relies on the RCD)'] : [];
   const reasons = [...loop, ...others];
   return reasons.length > 0 ? `${STATUS_WORD[c.verdict]}: ${reasons.join(', ')}` : STATUS_WORD[c.verdict];
 }

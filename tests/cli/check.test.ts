@@ -56,8 +56,10 @@ describe('exit status follows the findings', () => {
   it('exits 1 when a circuit without an RCD fails', () => {
     const run = cli('check', fixture('fail.lwj'), '--json');
     expect(run.status).toBe(1);
-    const results = JSON.parse(run.stdout) as { summary: Record<string, number> };
-    expect(results.summary).toEqual({ pass: 0, fail: 1, rcd: 0, unchecked: 1 });
+    const results = JSON.parse(run.stdout) as { summary: Record<string, unknown> };
+    expect(results.summary).toMatchObject({ pass: 0, fail: 1, rcd: 0, unchecked: 1 });
+    // A failing loop is a failing verdict (job-format.md, results document version 2).
+    expect(results.summary.verdict).toMatchObject({ fail: 1 });
   });
 
   it('exits 1 when a failing circuit only relies on its RCD, and says so in words', () => {
