@@ -12,6 +12,7 @@ import { validateNode } from './nodes.js';
 import { validateLink } from './links.js';
 import { checkGraph } from './graph-rules.js';
 import { sizeWarnings } from './sizes.js';
+import { checkLimits, checkValueLimits, jsonSyntaxError } from './limits.js';
 
 export type LoadResult =
   | { ok: true; job: Job; warnings: Problem[]; migratedFrom: number | null }
@@ -25,13 +26,20 @@ function fileProblem(message: string): LoadResult {
 
 /** Read a job from the text of a `.lwj` file. */
 export function parseJob(text: string): LoadResult {
+  const source = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  // Limits (limits.ts): size and a bound on what JSON.parse could build, on the text; nesting and
+  // elements on the parsed value, before anything walks it.
+  const limit = checkLimits(source);
+  if (limit !== null) return { ok: false, problems: [limit] };
   let value: unknown;
   try {
-    value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
+    value = JSON.parse(source);
   } catch (e) {
     const detail = e instanceof Error ? e.message : String(e);
-    return fileProblem(`the file is not valid JSON (${detail}${lineAndColumn(text, detail)})`);
+    return fileProblem(`the file is not valid JSON (${jsonSyntaxError(source) ?? `${detail.replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ')}${lineAndColumn(source, detail)}`})`);
   }
+  const deep = checkValueLimits(value, source);
+  if (deep !== null) return { ok: false, problems: [deep] };
   return loadJob(value);
 }
 

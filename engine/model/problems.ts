@@ -19,15 +19,44 @@ export function formatProblem(p: Problem): string {
   return `${p.where}: ${p.message}`;
 }
 
-/** Show a bad value the way the user wrote it, briefly. */
+/** Characters a terminal or a message box could act on or hide behind, written as \u escapes:
+ *  DEL, the C1 controls and the bidirectional controls (JSON.stringify escapes only C0). */
+const HIDDEN = /[\u007f-\u009f\u200b-\u200f\u2028\u2029\u202a-\u202e\u2060-\u2069\ufeff]/g;
+
+function unhide(text: string): string {
+  return text.replace(HIDDEN, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+}
+
+/** At most `max` characters of `text`, never splitting a character made of two code units. */
+function cut(text: string, max: number): string {
+  if (text.length <= max) return text;
+  let end = max;
+  const last = text.charCodeAt(end - 1);
+  if (last >= 0xd800 && last <= 0xdbff) end--;
+  return `${text.slice(0, end)}…`;
+}
+
+/** Keeps JSON.stringify's work on a big bad value small: long texts and lists are cut first. */
+function shorten(_key: string, v: unknown): unknown {
+  if (typeof v === 'string') return cut(v, 40);
+  if (Array.isArray(v) && v.length > 8) return [...v.slice(0, 8), '…'];
+  if (typeof v === 'object' && v !== null && !Array.isArray(v)) {
+    const keys = Object.keys(v);
+    if (keys.length > 8) return Object.fromEntries([...keys.slice(0, 8).map((k) => [k, (v as Record<string, unknown>)[k]]), ['…', '…']]);
+  }
+  return v;
+}
+
+/** Show a bad value the way the user wrote it, briefly: texts cut to 40 characters, anything
+ *  else to 60, control and invisible characters escaped. */
 export function showValue(value: unknown): string {
   if (value === undefined) return 'nothing';
-  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+  if (typeof value === 'string') return unhide(JSON.stringify(cut(value, 40)));
   if (typeof value === 'number') return Number.isNaN(value) ? 'NaN' : String(value);
   try {
-    const text = JSON.stringify(value);
-    return text.length > 60 ? `${text.slice(0, 60)}…` : text;
+    const text = JSON.stringify(value, shorten);
+    return unhide(cut(text, 60));
   } catch {
-    return String(value);
+    return Array.isArray(value) ? 'a list' : typeof value === 'object' && value !== null ? 'an object' : String(value);
   }
 }
