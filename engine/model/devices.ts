@@ -13,6 +13,7 @@ export function validateDevice(site: Site, link: Json): void {
   const type = readChoice(site, device, 'type', DEVICE_TYPES, { required: true, path: 'device.type' });
   readNumber(site, device, 'rating', { above: 0 }, { required: true, path: 'device.rating' });
   readNumber(site, device, 'breaking', { above: 0 }, { path: 'device.breaking' });
+  readNumber(site, device, 'letThrough', { above: 0 }, { path: 'device.letThrough' });
   readString(site, device, 'label', { path: 'device.label' });
   switch (type) {
     case 'mcb':

@@ -2,9 +2,11 @@
 
 import type { Link } from './types.js';
 import type { Problem } from './problems.js';
-import { isObject, readChoice, readNumber, readObject, readString, Site, type Json } from './fields.js';
+import { isObject, readBoolean, readChoice, readNumber, readObject, readString, Site, type Json } from './fields.js';
 import { validateDevice, validateRcd } from './devices.js';
 import { MATERIALS } from './rules.js';
+
+export const INSULATIONS = ['pvc', 'xlpe'] as const;
 
 /** Checks one link's own fields; returns it when it has usable id, from and to (for the graph rules). */
 export function validateLink(value: unknown, index: number, problems: Problem[]): Link | undefined {
@@ -21,6 +23,17 @@ export function validateLink(value: unknown, index: number, problems: Problem[])
   readString(site, raw, 'name');
   readString(site, raw, 'notes');
   readNumber(site, raw, 'requiredTime', { above: 0, max: 3600 });
+  readChoice(site, raw, 'phases', [1, 3] as const);
+  readNumber(site, raw, 'designCurrent', { above: 0 });
+  readNumber(site, raw, 'powerFactor', { above: 0, max: 1 });
+  readNumber(site, raw, 'voltageDropLimit', { above: 0, max: 100 });
+  const measured = readObject(site, raw, 'measured');
+  if (measured) {
+    readNumber(site, measured, 'zs', { above: 0 }, { required: true, path: 'measured.zs' });
+    readNumber(site, measured, 'temperature', { min: -30, max: 60 }, { path: 'measured.temperature' });
+    readString(site, measured, 'date', { path: 'measured.date' });
+    readString(site, measured, 'instrument', { path: 'measured.instrument' });
+  }
   validateCable(site, raw);
   validateDevice(site, raw);
   validateRcd(site, raw);
@@ -38,4 +51,8 @@ function validateCable(site: Site, link: Json): void {
   readChoice(site, cable, 'earthMaterial', MATERIALS, { path: 'cable.earthMaterial' });
   readNumber(site, cable, 'parallel', { min: 1, integer: true }, { path: 'cable.parallel' });
   readNumber(site, cable, 'reactance', { min: 0, max: 0.01 }, { path: 'cable.reactance' });
+  readChoice(site, cable, 'insulation', INSULATIONS, { path: 'cable.insulation' });
+  readBoolean(site, cable, 'earthInCable', { path: 'cable.earthInCable' });
+  readNumber(site, cable, 'capacity', { above: 0 }, { path: 'cable.capacity' });
+  readNumber(site, cable, 'derating', { above: 0, max: 1 }, { path: 'cable.derating' });
 }

@@ -11,6 +11,7 @@ import { validateRules } from './rules.js';
 import { validateNode } from './nodes.js';
 import { validateLink } from './links.js';
 import { checkGraph } from './graph-rules.js';
+import { checkPhases } from './phase-rules.js';
 import { sizeWarnings } from './sizes.js';
 import { checkLimits, checkValueLimits, jsonSyntaxError } from './limits.js';
 
@@ -92,6 +93,7 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
     if (link) links.push({ item: link, index });
   });
   checkGraph(nodes, links, problems);
+  if (!problems.some((p) => p.severity === 'error')) checkPhases(nodes, links, problems);
   problems.push(...sizeWarnings(links));
 
   const errors = problems.filter((p) => p.severity === 'error');

@@ -26,8 +26,22 @@ export function validateNode(value: unknown, index: number, problems: Problem[])
     readNumber(site, at, 'x', {}, { required: true, path: 'at.x' });
     readNumber(site, at, 'y', {}, { required: true, path: 'at.y' });
   }
-  if (kind === 'supply') validateSource(site, raw);
-  if (kind === 'board') readNumber(site, raw, 'diversity', { min: 0, max: 1 });
+  if (kind === 'supply') {
+    validateSource(site, raw);
+    readChoice(site, raw, 'phases', [1, 3] as const);
+    const maxFault = readObject(site, raw, 'maxFault');
+    if (maxFault) {
+      readNumber(site, maxFault, 'current', { above: 0 }, { required: true, path: 'maxFault.current' });
+      readNumber(site, maxFault, 'xr', { min: 0 }, { path: 'maxFault.xr' });
+    }
+    const measured = readObject(site, raw, 'measured');
+    if (measured) {
+      readNumber(site, measured, 'ze', { above: 0 }, { required: true, path: 'measured.ze' });
+      readString(site, measured, 'date', { path: 'measured.date' });
+      readString(site, measured, 'instrument', { path: 'measured.instrument' });
+    }
+  }
+  if (kind === 'board') readNumber(site, raw, 'diversity', { above: 0, max: 1 });
   if (kind === 'point') {
     readChoice(site, raw, 'use', POINT_USES, { required: true });
     readBoolean(site, raw, 'handHeld');

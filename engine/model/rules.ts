@@ -1,11 +1,12 @@
 // Rules: the basis (a named set of defaults) and the job's overrides of it.
 
-import type { BasisName, Curve, Material, Rules } from './types.js';
+import type { BasisName, Curve, Material, MeasuredRule, Rules } from './types.js';
 import { isObject, readChoice, readNumber, readObject, Site, type Json } from './fields.js';
 
 export const BASES: readonly BasisName[] = ['au-nz', 'iec'];
 export const MATERIALS: readonly Material[] = ['Cu', 'Al'];
 export const CURVES: readonly Curve[] = ['B', 'C', 'D'];
+export const MEASURED_RULES: readonly MeasuredRule[] = ['temperature', 'fixed-factor'];
 
 export function validateRules(value: unknown, site: Site): Rules {
   if (value === undefined) return { basis: 'au-nz' };
@@ -21,13 +22,18 @@ export function validateRules(value: unknown, site: Site): Rules {
   readNumber(site, raw, 'voltageFactor', { above: 0, max: 2 });
   readNumber(site, raw, 'unknownSourceShare', { above: 0, below: 1 });
   readNumber(site, raw, 'reactance', { min: 0, max: 0.01 });
-  const rho = readObject(site, raw, 'resistivity');
-  if (rho) {
+  for (const field of ['resistivity', 'voltageDropResistivity', 'shortCircuitResistivity']) {
+    const rho = readObject(site, raw, field);
+    if (!rho) continue;
     for (const key of Object.keys(rho)) {
-      if (!(MATERIALS as readonly string[]).includes(key)) site.report(`resistivity.${key}`, `resistivity.${key} is not a conductor material; use "Cu" or "Al"`);
-      else readNumber(site, rho, key, { above: 0, max: 1 }, { path: `resistivity.${key}` });
+      if (!(MATERIALS as readonly string[]).includes(key)) site.report(`${field}.${key}`, `${field}.${key} is not a conductor material; use "Cu" or "Al"`);
+      else readNumber(site, rho, key, { above: 0, max: 1 }, { path: `${field}.${key}` });
     }
   }
+  readNumber(site, raw, 'voltageDropLimit', { above: 0, max: 100 });
+  readNumber(site, raw, 'maxVoltageFactor', { above: 0, max: 2 });
+  readChoice(site, raw, 'measuredRule', MEASURED_RULES);
+  readNumber(site, raw, 'measuredFactor', { above: 0, max: 1 });
   const multiples = readObject(site, raw, 'multiples');
   if (multiples) {
     for (const key of Object.keys(multiples)) {
