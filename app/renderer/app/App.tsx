@@ -13,6 +13,7 @@ import { Palette } from './Palette.js';
 import { StatusBar } from './StatusBar.js';
 import { AboutDialog, ProblemsDialog } from './dialogs.js';
 import { FindDialog } from './FindDialog.js';
+import { AddCircuitsDialog, ConnectDialog } from './WorkDialogs.js';
 import { ContextMenu } from './ContextMenu.js';
 import { RestoreBanner } from './RestoreBanner.js';
 import { Splitter } from './Splitter.js';
@@ -81,6 +82,8 @@ export function App() {
       </div>
       <ContextMenu />
       <FindDialog />
+      <AddCircuitsDialog />
+      <ConnectDialog />
       <AboutDialog />
       <ProblemsDialog />
     </ReactFlowProvider>

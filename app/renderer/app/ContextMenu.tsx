@@ -8,7 +8,7 @@ import { showShortcut } from '../commands/keys.js';
 import { useUi } from './ui.js';
 
 const desktop = typeof window !== 'undefined' && window.loopwright !== undefined;
-const items = COMMANDS.filter((c) => c.contextMenu);
+const items = COMMANDS.filter((c) => c.contextMenu && (!c.desktopOnly || desktop));
 const NONE: boolean[] = [];
 
 export function ContextMenu() {

@@ -7,7 +7,7 @@ import { showShortcut } from '../commands/keys.js';
 import { openFromInput } from '../io/files.js';
 
 const desktop = typeof window !== 'undefined' && window.loopwright !== undefined;
-const items = COMMANDS.filter((c) => c.toolbar);
+const items = COMMANDS.filter((c) => c.toolbar && (!c.desktopOnly || desktop));
 
 export function Toolbar() {
   // Only whether each button is enabled is subscribed (a drag or an edit that leaves them all as

@@ -6,6 +6,8 @@ import { Dialog } from './Dialog.js';
 import { Legend } from './Legend.js';
 import { useUi } from './ui.js';
 
+const desktop = typeof window !== 'undefined' && window.loopwright !== undefined;
+
 export function AboutDialog() {
   const open = useUi((s) => s.aboutOpen);
   if (!open) return null;
@@ -20,7 +22,7 @@ export function AboutDialog() {
       <h3>Keyboard</h3>
       <table className="lw-keys">
         <tbody>
-          {COMMANDS.filter((c) => c.shortcut).map((c) => (
+          {COMMANDS.filter((c) => c.shortcut && (!c.desktopOnly || desktop)).map((c) => (
             <tr key={c.id}><td>{c.label}</td><td><kbd>{showShortcut(c.shortcut!)}</kbd></td></tr>
           ))}
         </tbody>

@@ -10,6 +10,10 @@ export interface UiState {
   contextMenu: { x: number; y: number } | null;
   recovery: (Autosaved & { job: Job }) | null;
   rightTab: 'details' | 'job';
+  /** The board whose Add Circuits dialog is open. */
+  addCircuits: string | null;
+  /** The part whose Connect To dialog is open (it will feed the part chosen there). */
+  connectFrom: string | null;
   /** Widths and heights the user dragged to (px); null = the default layout. Kept in the browser. */
   layout: Layout;
   setLayout(patch: Partial<Layout>): void;
@@ -42,6 +46,8 @@ export const useUi = create<UiState>()((set) => ({
   contextMenu: null,
   recovery: null,
   rightTab: 'details',
+  addCircuits: null,
+  connectFrom: null,
   layout: readLayout(),
   setLayout: (patch) =>
     set((s) => {

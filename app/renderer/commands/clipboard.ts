@@ -7,6 +7,8 @@ import type { Edit } from '../store/edits.js';
 export interface Clip {
   nodes: JobNode[];
   links: Link[];
+  /** The feeding cable (with its device) of each copied point whose feeder is not copied. */
+  feeds?: Link[];
 }
 
 /** The selected nodes with everything below them, the selected links with what they feed. */
@@ -25,10 +27,15 @@ export function collectSubtree(job: Job, sel: { nodes: string[]; links: string[]
       stack.push(l.to);
     }
   }
+  const nodes = job.nodes.filter((n) => nodeIds.has(n.id));
+  // A point goes with its feeding cable and device: pasted, it hangs from the same board again.
+  const points = new Set(nodes.filter((n) => n.kind === 'point').map((n) => n.id));
+  const feeds = job.links.filter((l) => points.has(l.to) && !nodeIds.has(l.from) && !linkIds.has(l.id));
   return {
-    nodes: job.nodes.filter((n) => nodeIds.has(n.id)),
+    nodes,
     // A link whose feeding node is not copied is kept only if its far end is (it is dropped on paste).
     links: job.links.filter((l) => linkIds.has(l.id)),
+    ...(feeds.length > 0 ? { feeds } : {}),
   };
 }
 
@@ -41,7 +48,9 @@ function stem(id: string, fallback: string): string {
  * The edit that pastes a clip into the job: ids renamed (same letters, next free number), links
  * re-pointed, positions offset. A copied link whose feeding node is not in the clip is left out.
  */
-export function pasteEdit(job: Job, clip: Clip, offset: { x: number; y: number }): { edit: Edit; ids: { nodes: string[]; links: string[] } } {
+export function pasteEdit(
+  job: Job, clip: Clip, offset: { x: number; y: number }, attachTo: string | null = null,
+): { edit: Edit; ids: { nodes: string[]; links: string[] } } {
   const taken = allIds(job);
   const rename = new Map<string, string>();
   for (const n of clip.nodes) {
@@ -63,6 +72,16 @@ export function pasteEdit(job: Job, clip: Clip, offset: { x: number; y: number }
     const to = rename.get(l.to);
     if (!from || !to) continue;
     const id = nextId(job, stem(l.id, 'L'), taken);
+    taken.add(id);
+    edits.push({ op: 'add-link', link: { ...l, id, from, to } });
+    links.push(id);
+  }
+  // A copied point's feeding cable: from the board selected for the paste, else its own board if still there.
+  for (const l of clip.feeds ?? []) {
+    const to = rename.get(l.to);
+    const from = attachTo ?? l.from;
+    if (!to || !job.nodes.some((n) => n.id === from)) continue;
+    const id = nextId(job, stem(l.id, 'C'), taken);
     taken.add(id);
     edits.push({ op: 'add-link', link: { ...l, id, from, to } });
     links.push(id);

@@ -8,7 +8,10 @@ import { isTyping, runCommand } from './context.js';
 /** Chord → command id, for every shortcut and alternate. */
 export function shortcutTable(): Map<string, string> {
   const table = new Map<string, string>();
+  const desktop = typeof window !== 'undefined' && window.loopwright !== undefined;
   for (const c of COMMANDS) {
+    // A desktop-only command's key stays with the browser there (Ctrl+E is not taken for nothing).
+    if (c.desktopOnly && !desktop) continue;
     for (const s of [c.shortcut, ...(c.alternates ?? [])]) {
       if (s) table.set(chordKey(parseShortcut(s)), c.id);
     }

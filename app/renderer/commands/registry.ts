@@ -5,6 +5,8 @@ import { freeCentre, newPart } from '../sheet/parts.js';
 import { autoArrange } from '../sheet/arrange.js';
 import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
 import type { Command, CommandContext } from './types.js';
+import { addPartEdit, feederFor } from './adding.js';
+import { WORK_COMMANDS } from './work.js';
 import { importReadings } from '../io/readings-import.js';
 import { useTestingView } from '../panels/testing/view.js';
 
@@ -27,9 +29,16 @@ const hasSelection = (s: { selection: { nodes: string[]; links: string[] } }) =>
 function addPart(kind: NodeKind): Command['run'] {
   return (ctx) => {
     const store = ctx.store.getState();
-    // At the cursor (or the middle of the view), moved to the nearest spot no node covers.
-    const node = newPart(store.job, kind, freeCentre(store.job, kind, ctx.sheet?.cursor() ?? { x: 0, y: 0 }));
-    if (store.apply({ op: 'add-node', node }, `add ${kind}`).ok) store.select({ nodes: [node.id], links: [] });
+    // At the cursor (or the middle of the view), moved to the nearest spot no node covers; with a
+    // board selected, below it and already fed from it (adding.ts).
+    const feeder = feederFor(store.job, store.selection, kind);
+    const added = addPartEdit(store.job, kind, ctx.sheet?.cursor() ?? { x: 0, y: 0 }, feeder);
+    if (!store.apply(added.edit, feeder ? `add ${kind} to ${feeder.id}` : `add ${kind}`).ok) return;
+    store.select({ nodes: added.nodes, links: [] });
+    if (feeder) {
+      store.setMessage({ kind: 'info', text: `Added ${added.nodes[0]} fed from ${feeder.id} by ${added.links[0]}` });
+      ctx.sheet?.centre([feeder.id, ...added.nodes]);
+    }
   };
 }
 
@@ -41,8 +50,9 @@ function copySelection(ctx: CommandContext): number {
   const s = ctx.store.getState();
   clip = collectSubtree(s.job, s.selection);
   pasteCount = 0;
-  const n = clip.nodes.length + clip.links.length;
-  s.setMessage({ kind: 'info', text: `Copied ${plural(clip.nodes.length, 'node')} and ${plural(clip.links.length, 'link')}` });
+  const links = clip.links.length + (clip.feeds?.length ?? 0);
+  const n = clip.nodes.length + links;
+  s.setMessage({ kind: 'info', text: `Copied ${plural(clip.nodes.length, 'node')} and ${plural(links, 'link')}` });
   return n;
 }
 
@@ -52,7 +62,7 @@ export const COMMANDS: Command[] = [
   { id: 'file.save', label: 'Save', shortcut: 'Mod+S', group: 'file', toolbar: 'Save', separatorBefore: true, enabled: any, run: (ctx) => ctx.save(false) },
   { id: 'file.saveAs', label: 'Save As…', shortcut: 'Mod+Shift+S', group: 'file', enabled: any, run: (ctx) => ctx.save(true) },
   {
-    id: 'file.exportPdf', label: 'Export PDF…', shortcut: 'Mod+E', group: 'file', separatorBefore: true,
+    id: 'file.exportPdf', label: 'Export PDF…', shortcut: 'Mod+E', group: 'file', separatorBefore: true, desktopOnly: true,
     enabled: (_s, env) => env.desktop, run: (ctx) => ctx.exportPdf(),
   },
   { id: 'file.print', label: 'Print…', shortcut: 'Mod+P', group: 'file', toolbar: 'Print', enabled: any, run: (ctx) => ctx.print() },
@@ -88,7 +98,10 @@ export const COMMANDS: Command[] = [
       if (textCommand(ctx, 'paste') || !clip) return;
       pasteCount += 1;
       const s = ctx.store.getState();
-      const { edit, ids } = pasteEdit(s.job, clip, { x: 40 * pasteCount, y: 40 * pasteCount });
+      // With one board selected (not itself copied) pasted points hang from it; else from their own board.
+      const target = s.selection.nodes.length === 1 && s.selection.links.length === 0 && !clip.nodes.some((n) => n.id === s.selection.nodes[0])
+        ? s.job.nodes.find((n) => n.id === s.selection.nodes[0] && n.kind === 'board')?.id ?? null : null;
+      const { edit, ids } = pasteEdit(s.job, clip, { x: 40 * pasteCount, y: 40 * pasteCount }, target);
       const outcome = s.apply(edit, 'paste');
       if (!outcome.ok) return;
       const after = ctx.store.getState();
@@ -186,6 +199,7 @@ export const COMMANDS: Command[] = [
       v.setView(v.view === 'testing' ? 'design' : 'testing');
     },
   },
+  ...WORK_COMMANDS,
   { id: 'help.about', label: 'About Loopwright', shortcut: 'F1', group: 'help', enabled: any, run: (ctx) => ctx.openAbout() },
 ];
 

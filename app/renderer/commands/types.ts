@@ -43,6 +43,8 @@ export interface Command {
   /** Shown in the sheet's context menu. */
   contextMenu?: boolean;
   separatorBefore?: boolean;
+  /** Only in the desktop app: left out of the browser's toolbar, menus and key list (its key does nothing there). */
+  desktopOnly?: boolean;
   enabled(state: EditorState, ctx: { desktop: boolean }): boolean;
   run(ctx: CommandContext): void | Promise<void>;
 }

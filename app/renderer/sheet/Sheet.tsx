@@ -10,7 +10,8 @@ import { useEditor } from '../store/editor.js';
 import { connectParts } from '../commands/wiring.js';
 import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
-import { flowList, toFlowEdge, toFlowNode } from './flow.js';
+import { flowList, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
+import { selectSearchable } from '../store/selectors.js';
 import { setSheetHandle } from './handle.js';
 import { newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
@@ -81,8 +82,12 @@ export function Sheet({ onContextMenu }: SheetProps) {
   // Incremental: a drag frame replaces only the moved nodes; the links' array stays the same one.
   const nodeList = useMemo(() => flowList<(typeof jobNodes)[number], Node>(toFlowNode), []);
   const edgeList = useMemo(() => flowList<(typeof jobLinks)[number], Edge>(toFlowEdge), []);
-  const nodes = nodeList(jobNodes, selection.nodes);
-  const edges = edgeList(jobLinks, selection.links);
+  // Read-out names and the not-fed flag: rebuilt when an id, name, end or result changes, not on a drag frame.
+  const searchable = useEditor(selectSearchable);
+  const resultById = useEditor((s) => s.resultById);
+  const decor = useMemo(() => sheetDecor(searchable, resultById), [searchable, resultById]);
+  const nodes = nodeList(jobNodes, selection.nodes, decor);
+  const edges = edgeList(jobLinks, selection.links, decor);
 
   const centre = useCallback(
     (ids: string[]) => {

@@ -11,8 +11,18 @@ import { NODE_SIZE } from './parts.js';
 const EMPTY: Record<string, unknown> = {};
 const HANDLE = 8;
 
-const nodeCache = new WeakMap<JobNode, { selected: boolean; node: Node }>();
-const edgeCache = new WeakMap<Link, { selected: boolean; edge: Edge }>();
+const nodeCache = new WeakMap<JobNode, { selected: boolean; unfed: boolean; label: string; node: Node }>();
+const edgeCache = new WeakMap<Link, { selected: boolean; label: string; edge: Edge }>();
+
+/** What a node or link is read out as, and whether a node is fed: worked out once per edit. */
+export interface Decor {
+  /** Nodes no link feeds (a point or board drawn but not connected). */
+  unfed: ReadonlySet<string>;
+  /** Accessible names by id (id, name and status), for the nodes and links. */
+  label: ReadonlyMap<string, string>;
+}
+
+const NO_DECOR: Decor = { unfed: new Set(), label: new Map() };
 
 function handles(kind: JobNode['kind']): NodeHandle[] {
   const { width, height } = NODE_SIZE[kind];
@@ -22,9 +32,11 @@ function handles(kind: JobNode['kind']): NodeHandle[] {
   return [{ id: null, type: 'target', position: Position.Top, x: width / 2 - HANDLE / 2, y: -HANDLE / 2, width: HANDLE, height: HANDLE }, out];
 }
 
-export function toFlowNode(n: JobNode, selected: boolean): Node {
+export function toFlowNode(n: JobNode, selected: boolean, decor: Decor = NO_DECOR): Node {
+  const unfed = decor.unfed.has(n.id);
+  const label = decor.label.get(n.id) ?? `${n.kind} ${n.id}${n.name ? ` ${n.name}` : ''}`;
   const hit = nodeCache.get(n);
-  if (hit && hit.selected === selected) return hit.node;
+  if (hit && hit.selected === selected && hit.unfed === unfed && hit.label === label) return hit.node;
   const size = NODE_SIZE[n.kind];
   const node: Node = {
     id: n.id,
@@ -36,29 +48,33 @@ export function toFlowNode(n: JobNode, selected: boolean): Node {
     height: size.height,
     measured: { ...size },
     handles: handles(n.kind),
+    ariaLabel: label,
+    ...(unfed ? { className: 'lw-unfed' } : {}),
   };
-  nodeCache.set(n, { selected, node });
+  nodeCache.set(n, { selected, unfed, label, node });
   return node;
 }
 
-export function toFlowEdge(l: Link, selected: boolean): Edge {
+export function toFlowEdge(l: Link, selected: boolean, decor: Decor = NO_DECOR): Edge {
+  const label = decor.label.get(l.id) ?? `link ${l.id}${l.name ? ` ${l.name}` : ''}, ${l.from} to ${l.to}`;
   const hit = edgeCache.get(l);
-  if (hit && hit.selected === selected) return hit.edge;
-  const edge: Edge = { id: l.id, source: l.from, target: l.to, type: 'link', data: EMPTY, selected };
-  edgeCache.set(l, { selected, edge });
+  if (hit && hit.selected === selected && hit.label === label) return hit.edge;
+  const edge: Edge = { id: l.id, source: l.from, target: l.to, type: 'link', data: EMPTY, selected, ariaLabel: label };
+  edgeCache.set(l, { selected, label, edge });
   return edge;
 }
 
 /** Builds a flow array from records and the selected ids, reusing what did not change. */
-export type FlowList<R, F> = (records: readonly R[], selected: readonly string[]) => F[];
+export type FlowList<R, F> = (records: readonly R[], selected: readonly string[], decor?: Decor) => F[];
 
-export function flowList<R extends { id: string }, F>(make: (record: R, selected: boolean) => F): FlowList<R, F> {
+export function flowList<R extends { id: string }, F>(make: (record: R, selected: boolean, decor: Decor) => F): FlowList<R, F> {
   let lastRecords: readonly R[] | null = null;
   let lastSelected: readonly string[] = [];
+  let lastDecor: Decor = NO_DECOR;
   let selectedSet = new Set<string>();
   let out: F[] = [];
-  return (records, selected) => {
-    if (records === lastRecords && selected === lastSelected) return out;
+  return (records, selected, decor = NO_DECOR) => {
+    if (records === lastRecords && selected === lastSelected && decor === lastDecor) return out;
     // Ids whose selection state flipped (most changes flip none, a click a few).
     let flipped: Set<string> | null = null;
     if (selected !== lastSelected) {
@@ -69,17 +85,20 @@ export function flowList<R extends { id: string }, F>(make: (record: R, selected
       selectedSet = next;
       lastSelected = selected;
     }
+    // New decoration (an edit changed results or feeds): every entry is asked, the unchanged come back from the cache.
+    const redecorate = decor !== lastDecor;
+    lastDecor = decor;
     const previous = lastRecords;
     lastRecords = records;
     if (!previous || previous.length !== records.length) {
-      out = records.map((r) => make(r, selectedSet.has(r.id)));
+      out = records.map((r) => make(r, selectedSet.has(r.id), decor));
       return out;
     }
     let changed: F[] | null = null;
     for (let i = 0; i < records.length; i++) {
       const r = records[i]!;
-      if (r === previous[i] && !flipped?.has(r.id)) continue;
-      const f = make(r, selectedSet.has(r.id));
+      if (!redecorate && r === previous[i] && !flipped?.has(r.id)) continue;
+      const f = make(r, selectedSet.has(r.id), decor);
       if (f === out[i]) continue;
       changed ??= out.slice();
       changed[i] = f;
@@ -87,4 +106,45 @@ export function flowList<R extends { id: string }, F>(make: (record: R, selected
     if (changed) out = changed;
     return out;
   };
+}
+
+const STATUS_READ: Record<string, string> = { pass: '✓ pass', fail: '✗ FAIL', rcd: '⚠ RCD-reliant', unchecked: '○ unchecked' };
+const KIND_WORD: Record<JobNode['kind'], string> = { supply: 'Supply', board: 'Board', point: 'Point' };
+
+/**
+ * Which nodes nothing feeds, and what every node and link is read out as: its id, its name and
+ * its status (a link's result; a node's that of the link feeding it).
+ */
+export function sheetDecor(
+  job: { nodes: readonly JobNode[]; links: readonly Link[] },
+  resultById: Readonly<Record<string, { status: string } | undefined>>,
+): Decor {
+  const feeder = new Map<string, Link>();
+  for (const l of job.links) if (!feeder.has(l.to)) feeder.set(l.to, l);
+  const fanOut = new Map<string, number>();
+  for (const l of job.links) fanOut.set(l.from, (fanOut.get(l.from) ?? 0) + 1);
+  const unfed = new Set<string>();
+  const label = new Map<string, string>();
+  for (const n of job.nodes) {
+    const name = n.name ? ` "${n.name}"` : '';
+    if (n.kind === 'supply') {
+      const k = fanOut.get(n.id) ?? 0;
+      label.set(n.id, `Supply ${n.id}${name}, feeds ${k} link${k === 1 ? '' : 's'}`);
+      continue;
+    }
+    const feed = feeder.get(n.id);
+    if (!feed) {
+      unfed.add(n.id);
+      label.set(n.id, `${KIND_WORD[n.kind]} ${n.id}${name}: ⚠ not fed, nothing connects to it`);
+      continue;
+    }
+    const status = STATUS_READ[resultById[feed.id]?.status ?? 'unchecked'] ?? '○ unchecked';
+    label.set(n.id, `${KIND_WORD[n.kind]} ${n.id}${name}, fed by ${feed.id}: ${status}`);
+  }
+  for (const l of job.links) {
+    const name = l.name ? ` "${l.name}"` : '';
+    const status = STATUS_READ[resultById[l.id]?.status ?? 'unchecked'] ?? '○ unchecked';
+    label.set(l.id, `Link ${l.id}${name}, ${l.from} to ${l.to}: ${status}`);
+  }
+  return { unfed, label };
 }
