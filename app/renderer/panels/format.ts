@@ -92,4 +92,4 @@ export function powerFactor(v: number | null | undefined): string {
 }
 
 // The checks of a verdict and their words: the same as the sheet's labels use.
-export { CHECKS, checkStatuses, failingChecks, type CheckKey } from '../sheet/labels.js';
+export { CHECKS, checkStatuses, failingChecks, shownVerdict, verdictText, type CheckKey } from '../sheet/labels.js';

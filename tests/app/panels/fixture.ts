@@ -63,3 +63,39 @@ export function linkOf(id: string) {
   if (!link) throw new Error(`no link ${id}`);
   return link;
 }
+
+/**
+ * A version 2 job with loads (invented data, for tests only): a single-phase supply of known
+ * impedance, a board with diversity, C1 a short lighting circuit that passes every check, C2 a
+ * long 2.5 mm² circuit carrying 20 A whose voltage drop fails (about 15 % of U0 by
+ * method-depth.md section 3), C3 a circuit with a measured reading.
+ */
+export function loadsJob(): Job {
+  const value = {
+    format: 'loopwright.job',
+    version: 2,
+    job: { title: 'Loads test', site: '', client: '', designer: '', reference: 'T-2', revision: 'A', date: '2026-12-01', notes: '' },
+    rules: { basis: 'iec' },
+    nodes: [
+      { id: 'S1', kind: 'supply', name: 'Point of supply', at: { x: 0, y: 0 }, source: { type: 'impedance', r: 0.2, x: 0.1 },
+        phases: 1, maxFault: { current: 6000, xr: 1 } },
+      { id: 'MSB', kind: 'board', name: 'Main switchboard', at: { x: 0, y: 160 }, diversity: 0.9 },
+      { id: 'P1', kind: 'point', name: 'Hall lights', use: 'lighting', at: { x: -200, y: 320 }, current: 2 },
+      { id: 'P2', kind: 'point', name: 'Shed heater', use: 'fixed-equipment', at: { x: 0, y: 320 }, current: 20, powerFactor: 1 },
+      { id: 'P3', kind: 'point', name: 'Garage', use: 'socket-outlets', at: { x: 200, y: 320 }, current: 8 },
+    ],
+    links: [
+      { id: 'M1', from: 'S1', to: 'MSB', cable: { length: 10, material: 'Cu', active: 16, earth: 6 },
+        device: { type: 'curve', rating: 63, points: [[200, 10], [400, 1], [1000, 0.1]], breaking: 10 } },
+      { id: 'C1', from: 'MSB', to: 'P1', name: 'Hall lights', cable: { length: 12, material: 'Cu', active: 1.5, earth: 1.5 },
+        device: { type: 'mcb', curve: 'B', rating: 10, breaking: 6 } },
+      { id: 'C2', from: 'MSB', to: 'P2', name: 'Shed heater', cable: { length: 120, material: 'Cu', active: 2.5, earth: 2.5 },
+        device: { type: 'mcb', curve: 'B', rating: 20, breaking: 6 }, rcd: { sensitivity: 0.03 } },
+      { id: 'C3', from: 'MSB', to: 'P3', name: 'Garage power', cable: { length: 20, material: 'Cu', active: 2.5, earth: 2.5 },
+        device: { type: 'mcb', curve: 'C', rating: 16, breaking: 6 }, measured: { zs: 0.75, temperature: 15, date: '2026-11-30', instrument: 'LT-1' } },
+    ],
+  };
+  const loaded = loadJob(value);
+  if (!loaded.ok) throw new Error(`fixture does not load: ${loaded.problems.map((p) => p.message).join('; ')}`);
+  return loaded.job;
+}

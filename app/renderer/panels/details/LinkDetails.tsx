@@ -8,6 +8,8 @@ import { NumberField, Readout, SelectField, TextField } from '../fields/fields.j
 import { ROLE_LONG, num } from '../format.js';
 import { CircuitResults } from './CircuitResults.js';
 import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
+import { LinkCableCapacityFields, LinkLoadFields, LinkReadingFields } from './LinkDesignFields.js';
+import { selectResult } from '../../store/index.js';
 import { FixList } from '../fixes/FixButtons.js';
 import { FeedPicker } from '../../app/FeedPicker.js';
 
@@ -63,6 +65,12 @@ export function LinkDetails({ link }: { link: Link }) {
   const fromKind = useEditor((s) => selectNode(link.from)(s)?.kind);
   const toKind = useEditor((s) => selectNode(link.to)(s)?.kind);
   const role = useRole(link, fromKind, toKind);
+  const result = useEditor(selectResult(id));
+  // In of the device that protects this link (its own, or the one upstream that protects it).
+  const protectingRating = useEditor((s) => {
+    const by = result?.protectedBy;
+    return by ? (s.job.links.find((l) => l.id === by)?.device?.rating ?? null) : null;
+  });
 
   return (
     <div className="lwp-details-body" data-details-link={id}>
@@ -93,6 +101,8 @@ export function LinkDetails({ link }: { link: Link }) {
           <NumberField field="cable.reactance" label="Reactance per conductor" unit="Ω/m" value={cable.reactance}
             min={0} optional placeholder={`${num(rules.reactance.value, 6)} (rules)`} onCommit={set('cable.reactance')} />
         </fieldset>
+        <LinkCableCapacityFields link={link} result={result} protectingRating={protectingRating} />
+        <LinkLoadFields link={link} result={result} />
         <DeviceEditor link={link} />
         <RcdEditor link={link} />
         <fieldset className="lwp-group" data-group="time">
@@ -100,6 +110,7 @@ export function LinkDetails({ link }: { link: Link }) {
           <NumberField field="requiredTime" label="Required time override" unit="s" value={link.requiredTime}
             above={0} optional placeholder="from the basis" onCommit={set('requiredTime')} />
         </fieldset>
+        <LinkReadingFields link={link} result={result} />
       </div>
       <CircuitResults linkId={id} />
       <FixList linkId={id} />
