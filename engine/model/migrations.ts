@@ -1,7 +1,8 @@
 // The migration chain. Each step lifts a file object from one format version to the next.
 // Version 2 adds only optional fields (loads, fault levels, readings; method-depth.md), so a
-// version 1 file becomes version 2 by changing its version alone
-// (tests/fixtures/v1-to-v2.before.lwj and .after.lwj).
+// version 1 file becomes version 2 by changing its version (and reading a board diversity of 0,
+// which version 1 allowed to no effect, as absent). Fixtures: tests/fixtures/v1-minimal.lwj
+// (before) and v1-minimal.expected.json (after).
 
 import type { Json } from './fields.js';
 
@@ -18,7 +19,18 @@ export const MIGRATIONS: readonly Migration[] = [
     from: 1,
     to: 2,
     summary: 'version 2 adds optional fields only (loads, voltage drop, capacity, fault levels, readings); nothing else changes',
-    up: (file) => file,
+    // Version 1 allowed a board diversity of 0, which had no effect there; version 2 requires
+    // 0 < d ≤ 1 and would otherwise zero every load below the board, so a 0 reads as absent.
+    up: (file) => {
+      if (Array.isArray(file.nodes)) {
+        for (const node of file.nodes as unknown[]) {
+          if (typeof node === 'object' && node !== null && (node as Record<string, unknown>).kind === 'board' && (node as Record<string, unknown>).diversity === 0) {
+            delete (node as Record<string, unknown>).diversity;
+          }
+        }
+      }
+      return file;
+    },
   },
 ];
 

@@ -99,7 +99,7 @@ export function jobArb(opts: TreeOptions = {}): fc.Arbitrary<Obj> {
     const nodeArbs = shape.kinds.map((kind, i) =>
       kind === 'board'
         ? fc
-            .record({ name: optional(text), diversity: optional(dec(0, 1, 2)), at: optional(fc.record({ x: fc.integer({ min: -500, max: 500 }), y: fc.integer({ min: 0, max: 900 }) })) })
+            .record({ name: optional(text), diversity: optional(dec(0.01, 1, 2)), at: optional(fc.record({ x: fc.integer({ min: -500, max: 500 }), y: fc.integer({ min: 0, max: 900 }) })) })
             .map((o) => clean({ id: `N${i + 1}`, kind: 'board', ...o }))
         : fc
             .record({
