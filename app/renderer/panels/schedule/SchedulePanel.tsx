@@ -7,8 +7,8 @@ import { useEditor } from '../../store/index.js';
 import { SizeList } from '../details/LinkDetails.js';
 import { STATUS_LOOK } from '../format.js';
 import {
-  COLUMNS, DEFAULT_SORT, STATUS_FILTERS, countByStatus, filterRows, nextSort, sortRows,
-  type ScheduleRowData, type SortState, type StatusFilter,
+  COLUMN_BY_KEY, COLUMN_SETS, COLUMN_SET_TITLE, DEFAULT_SORT, PINNED_WIDTH, SET_COLUMNS, STATUS_FILTERS, countByVerdict, filterRows,
+  nextSort, pinnedOffsets, sortRows, type ColumnSet, type ScheduleRowData, type SortState, type StatusFilter,
 } from './columns.js';
 import { ROW_HEIGHT, ScheduleRow } from './ScheduleRow.js';
 import { ScheduleViewSwitch, TestingView } from '../testing/TestingView.js';
@@ -19,10 +19,13 @@ const OVERSCAN = 10;
 /** Used until the body has been measured (and under test environments that do no layout). */
 const FALLBACK_VIEW_HEIGHT = 600;
 const SIZES_ID = 'lwp-sizes-schedule';
-/** Ratio and status stay in view at the right edge while the table scrolls sideways. */
-const STICKY: Partial<Record<string, string>> = { ratio: 'lwp-sticky-ratio', status: 'lwp-sticky-status' };
+/** Ratio, loop status and verdict stay in view at the right edge while the table scrolls sideways. */
+const STICKY: Partial<Record<string, string>> = { ratio: 'lwp-sticky-ratio', status: 'lwp-sticky-status', verdict: 'lwp-sticky-verdict' };
 /** Columns of bare numbers, right-aligned under a right-aligned head. */
-const NUMERIC = new Set(['rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength', 'ratio']);
+const NUMERIC = new Set([
+  'rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength', 'ratio', 'phases', 'pf', 'vdOwn', 'vdTotal', 'vdLimit',
+  'breaking', 'fault', 'earthMin', 'testLimit', 'measured',
+]);
 
 function filterLabel(f: StatusFilter): string {
   return f === 'all' ? 'all' : `${STATUS_LOOK[f].symbol} ${STATUS_LOOK[f].word}`;
@@ -67,6 +70,9 @@ function DesignSchedule() {
   const selectedLinks = useEditor((s) => s.selection.links);
   const [sort, setSort] = useState<SortState>(DEFAULT_SORT);
   const [filter, setFilter] = useState<StatusFilter>('all');
+  const [columnSet, setColumnSet] = useState<ColumnSet>('loop');
+  const columns = SET_COLUMNS[columnSet];
+  const offsets = useMemo(() => pinnedOffsets(columns), [columns]);
   const [scrollTop, setScrollTop] = useState(0);
   const [viewHeight, setViewHeight] = useState(FALLBACK_VIEW_HEIGHT);
   const bodyRef = useRef<HTMLDivElement>(null);
@@ -75,7 +81,7 @@ function DesignSchedule() {
     () => links.map((link, index) => ({ link, result: resultById[link.id], index })),
     [links, resultById],
   );
-  const counts = useMemo(() => countByStatus(rows), [rows]);
+  const counts = useMemo(() => countByVerdict(rows), [rows]);
   const shown = useMemo(() => sortRows(filterRows(rows, filter), sort), [rows, filter, sort]);
   const selected = useMemo(() => new Set(selectedLinks), [selectedLinks]);
 
@@ -112,9 +118,20 @@ function DesignSchedule() {
       <header className="lwp-panel-head">
         <h2 className="lwp-panel-title">Circuit schedule</h2>
         <ScheduleViewSwitch />
-        <div className="lwp-filters" role="group" aria-label="Filter by status">
+        <div className="lwp-filters" role="group" aria-label="Columns">
+          <span className="lwp-filters-label" aria-hidden="true">Columns</span>
+          {COLUMN_SETS.map((set) => (
+            <button key={set} type="button" data-column-set={set} aria-pressed={columnSet === set} title={COLUMN_SET_TITLE[set]}
+              className={columnSet === set ? 'lwp-button lwp-filter lwp-filter-on' : 'lwp-button lwp-filter'}
+              onClick={() => setColumnSet(set)}>
+              {set}
+            </button>
+          ))}
+        </div>
+        <div className="lwp-filters" role="group" aria-label="Filter by verdict">
+          <span className="lwp-filters-label" aria-hidden="true">Verdict</span>
           {STATUS_FILTERS.map((f) => (
-            <button key={f} type="button" data-status-filter={f} aria-pressed={filter === f}
+            <button key={f} type="button" data-verdict-filter={f} data-status-filter={f} aria-pressed={filter === f}
               className={filter === f ? 'lwp-button lwp-filter lwp-filter-on' : 'lwp-button lwp-filter'}
               onClick={() => setFilter(f)}>
               {filterLabel(f)} <span className="lwp-count">({counts[f]})</span>
@@ -128,9 +145,10 @@ function DesignSchedule() {
         <table className="lwp-schedule-table">
           <thead>
             <tr>
-              {COLUMNS.map((c) => (
-                <th key={c.key} scope="col"
+              {columns.map((key) => COLUMN_BY_KEY[key]).map((c) => (
+                <th key={c.key} scope="col" data-col={c.key}
                   className={`${c.group === 'result' ? 'lwp-col-result' : 'lwp-col-input'}${STICKY[c.key] ? ` ${STICKY[c.key]}` : ''}${NUMERIC.has(c.key) ? ' lwp-num-head' : ''}`}
+                  style={offsets[c.key] !== undefined ? { right: offsets[c.key], width: PINNED_WIDTH[c.key], minWidth: PINNED_WIDTH[c.key] } : undefined}
                   aria-sort={sort.key === c.key ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none'}>
                   <button type="button" className="lwp-sort" data-sort={c.key} title={`${c.title}. Click to sort.`}
                     onClick={() => setSort((s) => nextSort(s, c.key))}>
@@ -149,21 +167,22 @@ function DesignSchedule() {
           <tbody onKeyDown={(e) => moveByKey(e, shown)}>
             {first > 0 ? (
               <tr aria-hidden="true" className="lwp-spacer" style={{ height: first * ROW_HEIGHT }}>
-                <td colSpan={COLUMNS.length} />
+                <td colSpan={columns.length} />
               </tr>
             ) : null}
             {visible.map((row) => (
-              <ScheduleRow key={row.link.id} id={row.link.id} selected={selected.has(row.link.id)} sizesId={SIZES_ID} />
+              <ScheduleRow key={row.link.id} id={row.link.id} selected={selected.has(row.link.id)} sizesId={SIZES_ID}
+                columns={columns} offsets={offsets} />
             ))}
             {last < shown.length ? (
               <tr aria-hidden="true" className="lwp-spacer" style={{ height: (shown.length - last) * ROW_HEIGHT }}>
-                <td colSpan={COLUMNS.length} />
+                <td colSpan={columns.length} />
               </tr>
             ) : null}
           </tbody>
         </table>
         {shown.length === 0 ? (
-          <p className="lwp-empty">{rows.length === 0 ? 'No links yet: connect two nodes on the sheet.' : `No ${filter} circuits.`}</p>
+          <p className="lwp-empty">{rows.length === 0 ? 'No links yet: connect two nodes on the sheet.' : `No circuits with the verdict ${filterLabel(filter)}.`}</p>
         ) : null}
       </div>
     </section>

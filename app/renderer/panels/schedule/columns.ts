@@ -1,6 +1,7 @@
 // The schedule's columns, their sort keys, and sorting/filtering (pure, tested directly).
 
 import type { CircuitResult, Link, Status } from '../../../../engine/index.js';
+import { shownVerdict } from '../../sheet/labels.js';
 
 export interface ScheduleRowData {
   link: Link;
@@ -11,7 +12,9 @@ export interface ScheduleRowData {
 
 export type ColumnKey =
   | 'id' | 'name' | 'from' | 'to' | 'role' | 'cable' | 'length' | 'device' | 'rcd'
-  | 'loop' | 'limit' | 'ia' | 'treq' | 'ratio' | 'maxLength' | 'status';
+  | 'loop' | 'limit' | 'ia' | 'treq' | 'ratio' | 'maxLength' | 'status'
+  | 'phases' | 'ib' | 'pf' | 'vdOwn' | 'vdTotal' | 'vdLimit' | 'vStatus' | 'iz' | 'izStatus'
+  | 'breaking' | 'fault' | 'bStatus' | 'earthMin' | 'wStatus' | 'testLimit' | 'measured' | 'mStatus' | 'verdict';
 
 export interface Column {
   key: ColumnKey;
@@ -55,8 +58,70 @@ export const COLUMNS: readonly Column[] = [
   { key: 'treq', label: 't req', unit: 's', title: 'Required disconnection time (s)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.requiredTime ?? null },
   { key: 'maxLength', label: 'Max len.', unit: 'm', title: 'Maximum length of this link for its loop to stay within the limit (m)', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.maxLength ?? null },
   { key: 'ratio', label: 'Ratio', unit: '%', title: 'Loop impedance as a share of its limit, % (worst first by default)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.ratio ?? null },
-  { key: 'status', label: 'Status', title: 'fail, relies on RCD, pass, unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.status] : null) },
+  { key: 'status', label: 'Loop', title: 'The loop impedance check: fail, relies on RCD, pass, unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.status] : null) },
+  { key: 'phases', label: 'Ph.', title: 'Phases, stated or derived (1 or 3)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.phases ?? null },
+  { key: 'ib', label: 'Ib', unit: 'A', title: 'Design current Ib (A): the override typed here, else from the loads below', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.designCurrent ?? null },
+  { key: 'pf', label: 'cos φ', title: 'Power factor used for the voltage drop', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.powerFactor ?? null },
+  { key: 'vdOwn', label: 'Vd own', unit: '%', title: 'Voltage drop in this link (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDrop ?? null },
+  { key: 'vdTotal', label: 'Vd total', unit: '%', title: 'Voltage drop from the supply to the far end (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDropTotal ?? null },
+  { key: 'vdLimit', label: 'Vd limit', unit: '%', title: 'Voltage-drop limit at the point (% of U0); none for a link to a board', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.voltageDropLimit ?? null },
+  { key: 'vStatus', label: 'Drop', title: 'The voltage-drop check: total drop against the limit', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.voltageStatus] : null) },
+  { key: 'iz', label: 'Iz', unit: 'A', title: 'Cable capacity Iz (A): the value typed here, else the table times derating', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.capacity ?? null },
+  { key: 'izStatus', label: 'Capacity', title: 'The capacity check Ib ≤ In ≤ Iz', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.capacityStatus] : null) },
+  { key: 'breaking', label: 'Icn', unit: 'kA', title: 'Breaking capacity of the device (kA)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.breaking ?? null },
+  { key: 'fault', label: 'Fault lvl', unit: 'kA', title: 'Maximum prospective fault current at the link\u2019s origin (kA)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.faultLevel ?? null },
+  { key: 'bStatus', label: 'Breaking', title: 'The breaking-capacity check: the device breaks the fault level', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.breakingStatus] : null) },
+  { key: 'earthMin', label: 'PE min', unit: 'mm²', title: 'Least protective-conductor area for the fault energy (adiabatic), mm²', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.earthMinArea ?? null },
+  { key: 'wStatus', label: 'Withstand', title: 'The protective conductor\u2019s withstand check', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.withstandStatus] : null) },
+  { key: 'testLimit', label: 'Test limit', unit: 'Ω', title: 'Largest measured Zs that passes, at the measured temperature (else 20 °C), Ω', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.testLimit ?? null },
+  { key: 'measured', label: 'Measured', unit: 'Ω', title: 'Measured Zs, with the corrected value below (Ω)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.measured?.zs ?? null },
+  { key: 'mStatus', label: 'Reading', title: 'The measured reading against its corrected limit', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x)?.measured ? STATUS_RANK[r(x)!.measured!.status] : null) },
+  { key: 'verdict', label: 'Verdict', title: 'fail when any check fails; else relies on RCD; else pass; else unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[shownVerdict(r(x))] : null) },
 ];
+
+export type ColumnSet = 'loop' | 'loads' | 'faults' | 'testing' | 'all';
+export const COLUMN_SETS: readonly ColumnSet[] = ['loop', 'loads', 'faults', 'testing', 'all'];
+export const COLUMN_SET_TITLE: Record<ColumnSet, string> = {
+  loop: 'Earth-fault loop: impedance, limit, trip current, ratio',
+  loads: 'Loads: design current, power factor, voltage drop, capacity',
+  faults: 'Faults: fault level and breaking capacity, earth withstand',
+  testing: 'Testing: test limit, measured reading and its result',
+  all: 'Every column (scrolls sideways on a narrow screen)',
+};
+
+/**
+ * The columns of each set, in order. Each set but 'all' holds what decides a circuit for its
+ * question and fits a 1280 px wide window without scrolling sideways; the verdict is in every set.
+ */
+export const SET_COLUMNS: Record<ColumnSet, readonly ColumnKey[]> = {
+  loop: ['id', 'name', 'from', 'to', 'role', 'cable', 'length', 'device', 'rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength', 'ratio', 'status', 'verdict'],
+  loads: ['id', 'name', 'to', 'phases', 'cable', 'length', 'device', 'ib', 'pf', 'vdOwn', 'vdTotal', 'vdLimit', 'vStatus', 'iz', 'izStatus', 'verdict'],
+  faults: ['id', 'name', 'to', 'role', 'cable', 'length', 'device', 'breaking', 'fault', 'bStatus', 'earthMin', 'wStatus', 'verdict'],
+  testing: ['id', 'name', 'to', 'cable', 'length', 'device', 'rcd', 'testLimit', 'measured', 'mStatus', 'ratio', 'status', 'verdict'],
+  all: [
+    'id', 'name', 'from', 'to', 'role', 'phases', 'cable', 'length', 'device', 'rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength',
+    'ib', 'pf', 'vdOwn', 'vdTotal', 'vdLimit', 'vStatus', 'iz', 'izStatus', 'breaking', 'fault', 'bStatus', 'earthMin', 'wStatus',
+    'testLimit', 'measured', 'mStatus', 'ratio', 'status', 'verdict',
+  ],
+};
+
+/** Columns that stay in view at the right edge while a wide set scrolls sideways, right-most last. */
+export const PINNED: readonly ColumnKey[] = ['ratio', 'status', 'verdict'];
+/** Their widths (px), from which each pinned column's offset from the right edge follows. */
+export const PINNED_WIDTH: Partial<Record<ColumnKey, number>> = { ratio: 62, status: 112, verdict: 112 };
+
+/** The right offset (px) of each pinned column of a set that ends with pinned columns. */
+export function pinnedOffsets(keys: readonly ColumnKey[]): Partial<Record<ColumnKey, number>> {
+  const out: Partial<Record<ColumnKey, number>> = {};
+  let right = 0;
+  for (let i = keys.length - 1; i >= 0; i--) {
+    const k = keys[i]!;
+    if (!PINNED.includes(k)) break;
+    out[k] = right;
+    right += PINNED_WIDTH[k] ?? 0;
+  }
+  return out;
+}
 
 export const COLUMN_BY_KEY: Record<ColumnKey, Column> = Object.fromEntries(COLUMNS.map((c) => [c.key, c])) as Record<ColumnKey, Column>;
 
@@ -90,13 +155,21 @@ export function nextSort(current: SortState, key: ColumnKey): SortState {
 export type StatusFilter = 'all' | Status;
 export const STATUS_FILTERS: readonly StatusFilter[] = ['all', 'fail', 'rcd', 'pass', 'unchecked'];
 
-export function filterRows(rows: readonly ScheduleRowData[], filter: StatusFilter): ScheduleRowData[] {
-  if (filter === 'all') return rows.slice();
-  return rows.filter((row) => (row.result?.status ?? 'unchecked') === filter);
+/**
+ * The schedule filters by verdict: every check of a circuit, the loop included (as drawn on the
+ * sheet: never milder than the loop's own status).
+ */
+export function verdictOf(row: ScheduleRowData): Status {
+  return shownVerdict(row.result);
 }
 
-export function countByStatus(rows: readonly ScheduleRowData[]): Record<StatusFilter, number> {
+export function filterRows(rows: readonly ScheduleRowData[], filter: StatusFilter): ScheduleRowData[] {
+  if (filter === 'all') return rows.slice();
+  return rows.filter((row) => verdictOf(row) === filter);
+}
+
+export function countByVerdict(rows: readonly ScheduleRowData[]): Record<StatusFilter, number> {
   const counts: Record<StatusFilter, number> = { all: rows.length, fail: 0, rcd: 0, pass: 0, unchecked: 0 };
-  for (const row of rows) counts[row.result?.status ?? 'unchecked'] += 1;
+  for (const row of rows) counts[verdictOf(row)] += 1;
   return counts;
 }
