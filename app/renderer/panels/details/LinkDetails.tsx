@@ -11,6 +11,7 @@ import { DeviceEditor, RcdEditor } from './DeviceEditor.js';
 import { LinkCableCapacityFields, LinkLoadFields, LinkReadingFields } from './LinkDesignFields.js';
 import { selectResult } from '../../store/index.js';
 import { FixList } from '../fixes/FixButtons.js';
+import { TccView } from '../tcc/TccView.js';
 import { FeedPicker } from '../../app/FeedPicker.js';
 
 const MATERIALS: ReadonlyArray<{ value: Material; label: string }> = [
@@ -114,6 +115,7 @@ export function LinkDetails({ link }: { link: Link }) {
       </div>
       <CircuitResults linkId={id} />
       <FixList linkId={id} />
+      <TccView linkId={id} />
     </div>
   );
 }
