@@ -56,8 +56,49 @@ export function firstError(job: Job, touched: string[], base: Job | null = null)
   return mine ?? errors[0]!;
 }
 
-export function describe(p: Problem): string {
-  return formatProblem(p);
+const FIELD_WORDS: Record<string, string> = {
+  to: 'its far end',
+  from: 'its feeding end',
+  id: 'the id',
+  name: 'the name',
+  'cable.length': 'the cable length',
+  'cable.active': 'the active conductor size',
+  'cable.earth': 'the earth conductor size',
+  'cable.parallel': 'the number of sets in parallel',
+  'cable.reactance': 'the reactance',
+  'device.rating': 'the device rating',
+  'device.curve': 'the breaker curve',
+  'rcd.sensitivity': 'the RCD sensitivity',
+  requiredTime: 'the required disconnection time',
+};
+
+/** A link or node as the user knows it: `link SM3 "Workshop feed" (MSB → DB2)`, `board DB2 "Workshop"`. */
+function elementWords(job: Job | null, id: string): string {
+  const link = job?.links.find((l) => l.id === id);
+  if (link) return `link ${id}${link.name ? ` "${link.name}"` : ''} (${link.from} → ${link.to})`;
+  const node = job?.nodes.find((n) => n.id === id);
+  if (node) return `${node.kind} ${id}${node.name && node.name !== id ? ` "${node.name}"` : ''}`;
+  return id;
+}
+
+/**
+ * A problem in the user's words: the element by kind, id and name (not its place in the file's
+ * lists), the field by what it is, and any other link the message points at by its id.
+ */
+export function describe(p: Problem, job: Job | null = null): string {
+  if (!job) return formatProblem(p);
+  let message = p.message
+    .replace(/ \(links\[(\d+)\]\)/g, '')
+    .replace(/links\[(\d+)\]/g, (_m, i: string) => `link ${job.links[Number(i)]?.id ?? `number ${Number(i) + 1}`}`)
+    .replace(/nodes\[(\d+)\]/g, (_m, i: string) => `${job.nodes[Number(i)]?.kind ?? 'node'} ${job.nodes[Number(i)]?.id ?? `number ${Number(i) + 1}`}`);
+  if (p.field && message.startsWith(`${p.field} `)) {
+    const rest = message.slice(p.field.length + 1);
+    const words = FIELD_WORDS[p.field] ?? p.field;
+    message = p.field === 'to' && rest.startsWith('names the supply') ? `its far end is the supply${rest.slice('names the supply'.length)}` : `${words} ${rest}`;
+  }
+  const where = p.id !== undefined ? elementWords(job, p.id) : p.where === 'rules' ? 'the rules' : p.where === 'job' ? 'the job details' : p.where;
+  const text = `${where}: ${message}`;
+  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 export const EMPTY_RESULTS: Results = {

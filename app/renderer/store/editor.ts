@@ -35,6 +35,8 @@ export interface EditorState {
   focus: { ids: string[]; seq: number } | null;
   /** Changes every time loadJob replaces the document (the sheet fits the new job into view). */
   documentSeq: number;
+  /** Changes on every undo and redo (fields drop a refusal they were showing). */
+  historySeq: number;
   /** Labels of the next undo and redo steps, for menus ("Undo move"). */
   undoLabel: string | null;
   redoLabel: string | null;
@@ -91,7 +93,7 @@ function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; rea
   }
   if (next === job) return { ok: true, next };
   const problem = firstError(next, touchedIds(edit), job);
-  if (problem) return { ok: false, reason: describe(problem), ...(problem.field ? { field: problem.field } : {}) };
+  if (problem) return { ok: false, reason: describe(problem, next), ...(problem.field ? { field: problem.field } : {}) };
   return { ok: true, next };
 }
 
@@ -145,6 +147,7 @@ export const useEditor = create<EditorState>()((set, get) => {
     message: null,
     focus: null,
     documentSeq: 0,
+    historySeq: 0,
     undoLabel: null,
     redoLabel: null,
 
@@ -182,7 +185,7 @@ export const useEditor = create<EditorState>()((set, get) => {
       }
       gestureBase = null;
       future.push({ job: get().job, label: step.label });
-      become(step.job, true, { message: { kind: 'info', text: `Undid ${step.label}` } });
+      become(step.job, true, { message: { kind: 'info', text: `Undid ${step.label}` }, historySeq: get().historySeq + 1 });
     },
 
     redo() {
@@ -193,7 +196,7 @@ export const useEditor = create<EditorState>()((set, get) => {
       }
       gestureBase = null;
       past.push({ job: get().job, label: step.label });
-      become(step.job, true, { message: { kind: 'info', text: `Redid ${step.label}` } });
+      become(step.job, true, { message: { kind: 'info', text: `Redid ${step.label}` }, historySeq: get().historySeq + 1 });
     },
 
     loadJob(job, file) {

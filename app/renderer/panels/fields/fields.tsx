@@ -2,8 +2,43 @@
 // `onCommit` that returns the store's outcome; when the edit is refused (locally or by the
 // store), the reason is shown beside the field (role=alert) and the last good value comes back.
 
-import { useEffect, useId, useState, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type ReactNode, type RefObject } from 'react';
 import { parseNumber, showNumber, type NumberRule } from './parse.js';
+import { useEditor } from '../../store/editor.js';
+import { practiceWarning } from '../../store/practice.js';
+
+/**
+ * A refusal shown beside a field goes when an undo or redo happens, on Escape, and (in a schedule
+ * row) when the focus or a click leaves the row: it never stays behind to cover another row.
+ */
+function useDismiss(error: string | null, clear: () => void, anchor: RefObject<HTMLElement | null>) {
+  const historySeq = useEditor((s) => s.historySeq);
+  const first = useRef(true);
+  useEffect(() => {
+    if (first.current) first.current = false;
+    else clear();
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [historySeq]);
+  useEffect(() => {
+    if (!error) return;
+    const scope = () => anchor.current?.closest('tr') ?? anchor.current?.closest('.lwp-field') ?? null;
+    const away = (e: Event) => {
+      const box = scope();
+      if (box && e.target instanceof Node && !box.contains(e.target)) clear();
+    };
+    const key = (e: KeyboardEvent) => {
+      if (e.key === 'Escape') clear();
+    };
+    document.addEventListener('focusin', away);
+    document.addEventListener('mousedown', away);
+    document.addEventListener('keydown', key);
+    return () => {
+      document.removeEventListener('focusin', away);
+      document.removeEventListener('mousedown', away);
+      document.removeEventListener('keydown', key);
+    };
+  }, [error, clear, anchor]);
+}
 
 export type Outcome = { ok: true } | { ok: false; reason: string; field?: string };
 
@@ -34,7 +69,7 @@ function errorHook(attr: HookAttr, field: string): Record<string, string> {
 export function FieldError({ attr = 'data-field', field, error }: { attr?: HookAttr; field: string; error: string | null }) {
   if (!error) return null;
   return (
-    <span className="lwp-field-error" role="alert" {...errorHook(attr, field)}>
+    <span className="lwp-field-error" role="alert" title={error} {...errorHook(attr, field)}>
       {error}
     </span>
   );
@@ -68,7 +103,11 @@ function useTextCommit(shown: string, commit: (text: string) => Outcome) {
     setError(null);
   }, [shown]);
   const run = () => {
-    if (text === shown) return;
+    // The value as it stands is a valid one: a refusal of an earlier try goes.
+    if (text === shown) {
+      setError(null);
+      return;
+    }
     const outcome = commit(text);
     if (outcome.ok) setError(null);
     else {
@@ -80,7 +119,10 @@ function useTextCommit(shown: string, commit: (text: string) => Outcome) {
     setText(shown);
     setError(null);
   };
-  return { text, setText, error, run, revert };
+  const anchor = useRef<HTMLElement | null>(null);
+  const [clear] = useState(() => () => setError(null));
+  useDismiss(error, clear, anchor);
+  return { text, setText, error, run, revert, anchor };
 }
 
 export interface NumberFieldProps extends Common, NumberRule {
@@ -95,15 +137,24 @@ export function NumberField(props: NumberFieldProps) {
   const { field, label, unit, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const shown = showNumber(value, props.scale);
-  const { text, setText, error, run, revert } = useTextCommit(shown, (t) => {
+  const { text, setText, error, run, revert, anchor } = useTextCommit(shown, (t) => {
     const parsed = parseNumber(t, props);
     if (!parsed.ok) return { ok: false, reason: parsed.reason };
     return onCommit(parsed.value);
   });
+  // Accepted, but far outside practice: a warning beside the field for as long as the value stands.
+  const warning = practiceWarning(field, value === undefined ? undefined : value);
+  const warn = warning ? (
+    <span className="lwp-field-warning" role="status" title={warning} {...{ [`${attr}-warning`]: field }}>
+      {props.compact ? '⚠' : `⚠ ${warning}`}
+      {props.compact ? <span className="lwp-visually-hidden">{warning}</span> : null}
+    </span>
+  ) : null;
   return (
     <Shell label={label} compact={props.compact} inputId={inputId} unit={unit} hint={props.hint}
-      error={<FieldError attr={attr} field={field} error={error} />}>
+      error={<>{warn}<FieldError attr={attr} field={field} error={error} /></>}>
       <input
+        ref={(el) => { anchor.current = el; }}
         id={inputId}
         type="text"
         inputMode="decimal"
@@ -139,7 +190,7 @@ export interface TextFieldProps extends Common {
 export function TextField(props: TextFieldProps) {
   const { field, label, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
-  const { text, setText, error, run, revert } = useTextCommit(value ?? '', (t) =>
+  const { text, setText, error, run, revert, anchor } = useTextCommit(value ?? '', (t) =>
     onCommit(t === '' && props.emptyAs !== 'empty' ? undefined : t),
   );
   const common = {
@@ -152,6 +203,7 @@ export function TextField(props: TextFieldProps) {
     title: props.title,
     disabled: props.disabled,
     onBlur: run,
+    ref: (el: HTMLInputElement | HTMLTextAreaElement | null) => { anchor.current = el; },
     ...hook(attr, field),
   };
   return (
@@ -181,10 +233,14 @@ export function SelectField<T extends string>(props: SelectFieldProps<T>) {
   const { field, label, value, options, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const [error, setError] = useState<string | null>(null);
+  const anchor = useRef<HTMLSelectElement | null>(null);
+  const [clear] = useState(() => () => setError(null));
+  useDismiss(error, clear, anchor);
   return (
     <Shell label={label} compact={props.compact} inputId={inputId} hint={props.hint}
       error={<FieldError attr={attr} field={field} error={error} />}>
       <select
+        ref={anchor}
         id={inputId}
         className="lwp-input lwp-select"
         aria-label={label}
@@ -215,9 +271,13 @@ export function CheckField(props: CheckFieldProps) {
   const { field, label, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const [error, setError] = useState<string | null>(null);
+  const anchor = useRef<HTMLInputElement | null>(null);
+  const [clear] = useState(() => () => setError(null));
+  useDismiss(error, clear, anchor);
   return (
     <div className="lwp-field lwp-field-check">
       <input
+        ref={anchor}
         id={inputId}
         type="checkbox"
         checked={value}
