@@ -11,11 +11,21 @@ export function isObject(value: unknown): value is Json {
 
 /** A place in the file that problems are reported against. */
 export class Site {
+  private place: string | (() => string);
+
+  /** `where` may be given as a function, so a record with no problem never builds its text. */
   constructor(
     readonly problems: Problem[],
-    readonly where: string,
+    where: string | (() => string),
     readonly id?: string,
-  ) {}
+  ) {
+    this.place = where;
+  }
+
+  get where(): string {
+    if (typeof this.place === 'function') this.place = this.place();
+    return this.place;
+  }
 
   report(field: string, message: string, severity: Severity = 'error'): void {
     const p: Problem = { severity, where: this.where, field, message };
@@ -95,18 +105,10 @@ export function readString(site: Site, obj: Json, key: string, opts: { required?
 }
 
 export function readChoice<T extends string | number>(site: Site, obj: Json, key: string, choices: readonly T[], opts: { required?: boolean; path?: string } = {}): T | undefined {
-  const field = opts.path ?? key;
   const value = obj[key];
-  const allowed = `one of ${choices.map((c) => JSON.stringify(c)).join(', ')}`;
-  if (value === undefined) {
-    if (opts.required) site.bad(field, allowed, value);
-    return undefined;
-  }
-  if (!(choices as readonly unknown[]).includes(value)) {
-    site.bad(field, allowed, value);
-    return undefined;
-  }
-  return value as T;
+  if (value !== undefined && (choices as readonly unknown[]).includes(value)) return value as T;
+  if (value !== undefined || opts.required) site.bad(opts.path ?? key, `one of ${choices.map((c) => JSON.stringify(c)).join(', ')}`, value);
+  return undefined;
 }
 
 export function readBoolean(site: Site, obj: Json, key: string, opts: { path?: string } = {}): boolean | undefined {

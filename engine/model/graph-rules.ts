@@ -11,22 +11,22 @@ interface Indexed<T> {
 }
 
 function linkSite(problems: Problem[], l: Indexed<Link>): Site {
-  return new Site(problems, `links[${l.index}] (${l.item.id})`, l.item.id);
+  return new Site(problems, () => `links[${l.index}] (${l.item.id})`, l.item.id);
 }
 
 export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<Link>>, problems: Problem[]): void {
-  const seen = new Map<string, string>();
+  // Where each id was first used: a node (index ≥ 0) or a link (−1 − index).
+  const seen = new Map<string, number>();
+  const placeOf = (code: number): string => (code >= 0 ? `nodes[${code}] (${nodes.find((n) => n.index === code)!.item.id})` : `links[${-1 - code}] (${links.find((l) => l.index === -1 - code)!.item.id})`);
   for (const n of nodes) {
-    const here = `nodes[${n.index}] (${n.item.id})`;
     const before = seen.get(n.item.id);
-    if (before) new Site(problems, here, n.item.id).report('id', `id ${JSON.stringify(n.item.id)} is already used by ${before}; ids must be unique across nodes and links`);
-    else seen.set(n.item.id, here);
+    if (before !== undefined) new Site(problems, `nodes[${n.index}] (${n.item.id})`, n.item.id).report('id', `id ${JSON.stringify(n.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+    else seen.set(n.item.id, n.index);
   }
   for (const l of links) {
-    const here = `links[${l.index}] (${l.item.id})`;
     const before = seen.get(l.item.id);
-    if (before) linkSite(problems, l).report('id', `id ${JSON.stringify(l.item.id)} is already used by ${before}; ids must be unique across nodes and links`);
-    else seen.set(l.item.id, here);
+    if (before !== undefined) linkSite(problems, l).report('id', `id ${JSON.stringify(l.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+    else seen.set(l.item.id, -1 - l.index);
   }
 
   const nodeById = new Map(nodes.map((n) => [n.item.id, n.item]));
@@ -55,43 +55,69 @@ export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<
     feeder.set(to, l);
   }
 
-  // With at most one feeder per node, a cycle shows as a walk up the feeders that returns to itself.
-  const state = new Map<string, 'walking' | 'done'>();
-  for (const n of nodes) {
-    const walk: string[] = [];
-    let current: string | undefined = n.item.id;
-    while (current !== undefined && !state.has(current)) {
-      state.set(current, 'walking');
+  // From here on by position in `nodes`: each node's feeding link and the node above it.
+  const position = new Map<string, number>();
+  nodes.forEach((n, i) => {
+    if (!position.has(n.item.id)) position.set(n.item.id, i);
+  });
+  const feederAt: Array<Indexed<Link> | undefined> = nodes.map((n, i) => (position.get(n.item.id) === i ? feeder.get(n.item.id) : undefined));
+  const above = new Int32Array(nodes.length).fill(-1);
+  feederAt.forEach((f, i) => {
+    if (f) above[i] = position.get(f.item.from) ?? -1;
+  });
+
+  // With at most one feeder per node, a cycle shows as a walk up the feeders that returns to
+  // itself. state: 0 new, 1 on the current walk, 2 done; each node is walked once.
+  const state = new Uint8Array(nodes.length);
+  const walk: number[] = [];
+  for (let start = 0; start < nodes.length; start++) {
+    walk.length = 0;
+    let current = start;
+    while (current >= 0 && state[current] === 0) {
+      state[current] = 1;
       walk.push(current);
-      current = feeder.get(current)?.item.from;
+      current = above[current]!;
     }
-    if (current !== undefined && state.get(current) === 'walking') {
-      const loop = walk.slice(walk.indexOf(current));
-      const loopLinks = loop.map((id) => feeder.get(id)!).sort((a, b) => a.index - b.index);
+    if (current >= 0 && state[current] === 1) {
+      const loop = walk.slice(walk.indexOf(current)).map((i) => nodes[i]!.item.id);
+      const loopLinks = walk.slice(walk.indexOf(current)).map((i) => feederAt[i]!).sort((a, b) => a.index - b.index);
       const first = loopLinks[0]!;
       linkSite(problems, first).report(
         'to',
         `to ${JSON.stringify(first.item.to)} closes a cycle: links ${loopLinks.map((l) => l.item.id).join(', ')} loop through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
       );
     }
-    for (const id of walk) state.set(id, 'done');
+    for (const i of walk) state[i] = 2;
   }
 
-  // Unreached nodes: a warning, not an error.
-  for (const n of nodes) {
-    if (n.item.kind === 'supply') continue;
-    let current: string | undefined = n.item.id;
-    const visited = new Set<string>();
-    while (current !== undefined && !visited.has(current)) {
-      visited.add(current);
-      const node = nodeById.get(current);
-      if (node?.kind === 'supply') break;
-      current = feeder.get(current)?.item.from;
+  // Unreached nodes: a warning, not an error. reached: 0 unknown, 1 yes, 2 no; each walk up the
+  // feeders stops at a node already decided, so every node is visited once.
+  const reached = new Uint8Array(nodes.length);
+  const isReached = (start: number): boolean => {
+    walk.length = 0;
+    let current = start;
+    let answer = 2;
+    while (current >= 0) {
+      if (reached[current] !== 0) {
+        answer = reached[current]!;
+        break;
+      }
+      if (nodes[current]!.item.kind === 'supply') {
+        answer = 1;
+        break;
+      }
+      reached[current] = 2; // provisional: a cycle back to here is unreached
+      walk.push(current);
+      current = above[current]!;
     }
-    const reached = current !== undefined && nodeById.get(current)?.kind === 'supply';
-    if (!reached) {
+    for (const i of walk) reached[i] = answer;
+    return answer === 1;
+  };
+  nodes.forEach((n, i) => {
+    if (n.item.kind === 'supply') return;
+    if (!isReached(i)) {
       const name = n.item.name ? ` "${n.item.name}"` : '';
       new Site(problems, `nodes[${n.index}] (${n.item.id})`, n.item.id).report('', `${n.item.kind}${name} is not reached from any supply; its circuits are left unchecked`, 'warning');
     }
-  }
+  });
 }

@@ -11,7 +11,7 @@ export const INSULATIONS = ['pvc', 'xlpe'] as const;
 /** Checks one link's own fields; returns it when it has usable id, from and to (for the graph rules). */
 export function validateLink(value: unknown, index: number, problems: Problem[]): Link | undefined {
   const rawId = isObject(value) && typeof value.id === 'string' && value.id !== '' ? value.id : undefined;
-  const site = new Site(problems, rawId ? `links[${index}] (${rawId})` : `links[${index}]`, rawId);
+  const site = new Site(problems, () => (rawId ? `links[${index}] (${rawId})` : `links[${index}]`), rawId);
   if (!isObject(value)) {
     site.report('', `each link must be an object, got ${JSON.stringify(value)}`);
     return undefined;

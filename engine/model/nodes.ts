@@ -11,7 +11,7 @@ export const SOURCE_TYPES = ['unknown', 'impedance', 'fault-current'] as const;
 /** Checks one node's own fields; returns it when it has a usable id and kind (for the graph rules). */
 export function validateNode(value: unknown, index: number, problems: Problem[]): JobNode | undefined {
   const rawId = isObject(value) && typeof value.id === 'string' && value.id !== '' ? value.id : undefined;
-  const site = new Site(problems, rawId ? `nodes[${index}] (${rawId})` : `nodes[${index}]`, rawId);
+  const site = new Site(problems, () => (rawId ? `nodes[${index}] (${rawId})` : `nodes[${index}]`), rawId);
   if (!isObject(value)) {
     site.report('', `each node must be an object, got ${JSON.stringify(value)}`);
     return undefined;
