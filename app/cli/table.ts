@@ -2,7 +2,7 @@
 // other checks), the notes, the supplies' fault level and headroom, the worst fault path, the
 // summary of every check and the caution. It only arranges what analyse(job) computed.
 
-import { CAUTION, resolveRules, type CircuitResult, type Job, type Link, type Results } from '../../engine/index.js';
+import { CAUTION, plainText, resolveRules, terminalText, type CircuitResult, type Job, type Link, type Results } from '../../engine/index.js';
 import { ROLE_SHORT } from '../../engine/report/index.js';
 import { CHECK_COLUMNS, checkRows, fixLines, summaryLines, supplyLines } from './checks.js';
 import { amps, cableMark, clip, metres, ohms, percent, seconds, STATUS_WORD } from './format.js';
@@ -17,7 +17,7 @@ export interface Column<Row> {
 
 /** Lay rows out under their heads, each column as wide as its widest cell. */
 export function alignTable<Row>(columns: readonly Column<Row>[], rows: readonly Row[]): string[] {
-  const cells = rows.map((row) => columns.map((c) => c.cell(row)));
+  const cells = rows.map((row) => columns.map((c) => plainText(c.cell(row)))); // no control characters (sanitise.ts)
   const widths = columns.map((c, i) => Math.max(c.head.length, ...cells.map((r) => (r[i] ?? '').length)));
   const line = (texts: readonly string[]): string =>
     texts
@@ -118,5 +118,5 @@ export function renderCheck(job: Job, results: Results, view: CheckView = 'loop'
   lines.push('', worstLine(results), ...summaryLines(results));
   if (view === 'loop') lines.push('Drop, capacity, fault level, withstand, test limit, readings, verdict and fixes per link: check --checks.');
   lines.push('', `Caution: ${CAUTION}`);
-  return `${lines.join('\n')}\n`;
+  return `${terminalText(lines.join('\n'))}\n`;
 }

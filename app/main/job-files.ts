@@ -1,13 +1,15 @@
 // Reading and writing job files: Node's fs only, no Electron, so the rules are unit-tested.
 // - Reading goes through the engine's parseJob; a file it refuses comes back with every problem.
 // - A file that failed to load is remembered and never written over, even by Save As.
-// - Saving writes a temporary file beside the target and renames it over, so a crash or a full
-//   disk mid-write leaves the old file whole.
+// - Reading takes at most the engine's size limit from any path (a device or a pipe included).
+// - Saving goes through writeFileSafely (safe-files.ts): a temporary file flushed and renamed
+//   over, the folder flushed, the previous version kept as NAME.bak, a read-only file refused,
+//   a symbolic link written through, leftovers of a crash removed. A crash, a power cut or a
+//   full disk mid-write leaves the old file whole.
 
-import { randomBytes } from 'node:crypto';
-import { promises as fs } from 'node:fs';
 import path from 'node:path';
-import { formatProblem, parseJob, type Problem } from '../../engine/index.js';
+import { formatProblem, LIMITS, parseJob, type Problem } from '../../engine/index.js';
+import { readBounded, removeLeftovers, writeFileSafely } from './safe-files.js';
 
 export type ReadResult =
   | { ok: true; path: string; text: string; warnings: Problem[] }
@@ -38,7 +40,13 @@ export class RefusedFiles {
 export async function readJobFile(file: string, refused: RefusedFiles): Promise<ReadResult> {
   let text: string;
   try {
-    text = await fs.readFile(file, 'utf8');
+    const read = await readBounded(file, LIMITS.size);
+    if (!read.ok) {
+      refused.add(file);
+      const mb = (LIMITS.size / (1024 * 1024)).toFixed(0);
+      return { ok: false, path: file, message: `${path.basename(file)} was not opened: it is larger than ${mb} MB, the limit for a job file. The file has not been changed.`, problems: [] };
+    }
+    text = new TextDecoder('utf-8').decode(read.bytes);
   } catch (error) {
     refused.add(file);
     return { ok: false, path: file, message: `Could not read ${file}: ${reason(error)}`, problems: [] };
@@ -56,6 +64,7 @@ export async function readJobFile(file: string, refused: RefusedFiles): Promise<
     };
   }
   refused.delete(file);
+  await removeLeftovers(file); // temporary files of a save that a crash interrupted
   return { ok: true, path: file, text, warnings: loaded.warnings };
 }
 
@@ -87,42 +96,17 @@ export async function saveJobText(file: string, text: string, refused: RefusedFi
     return { ok: false, message: 'Not saved: the job text is not a job (expected a JSON object).' };
   }
   try {
-    await writeFileAtomic(file, text);
+    await writeFileSafely(file, text, { backup: true });
   } catch (error) {
     return { ok: false, message: `Could not save ${file}: ${reason(error)}. The file on disk is as it was.` };
   }
   return { ok: true, path: file };
 }
 
-/** Writes `data` to a temporary file in the same folder, flushes it, then renames it over `file`
- *  (atomic on one file system). On failure the temporary file is removed and `file` is untouched. */
+/** Writes `data` over `file` with the care of writeFileSafely, without a backup (for outputs
+ *  such as an exported PDF). On failure `file` is untouched and no temporary file is left. */
 export async function writeFileAtomic(file: string, data: string | Uint8Array): Promise<void> {
-  const dir = path.dirname(file);
-  const temp = path.join(dir, `.${path.basename(file)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`);
-  let handle: fs.FileHandle | null = null;
-  try {
-    handle = await fs.open(temp, 'wx', 0o644);
-    await handle.writeFile(data);
-    await handle.sync();
-    await handle.close();
-    handle = null;
-    await keepMode(file, temp);
-    await fs.rename(temp, file);
-  } catch (error) {
-    if (handle) await handle.close().catch(() => undefined);
-    await fs.rm(temp, { force: true }).catch(() => undefined);
-    throw error;
-  }
-}
-
-/** A file saved over keeps its permissions. */
-async function keepMode(file: string, temp: string): Promise<void> {
-  try {
-    const stat = await fs.stat(file);
-    await fs.chmod(temp, stat.mode & 0o7777);
-  } catch {
-    // no earlier file: the new file keeps the default mode
-  }
+  await writeFileSafely(file, data);
 }
 
 export function reason(error: unknown): string {
@@ -135,7 +119,9 @@ export function reason(error: unknown): string {
       EISDIR: 'it is a folder',
       ENOSPC: 'the disk is full',
       EROFS: 'the disk is read-only',
+      ELOOP: 'too many symbolic links',
     };
+    if (error instanceof Error && (code === 'EREADONLY' || code === 'ENOTFILE' || code === 'ELOOP')) return error.message;
     if (known[code]) return known[code];
   }
   return error instanceof Error ? error.message : String(error);

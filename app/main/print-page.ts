@@ -2,6 +2,8 @@
 // layoutReport, the same sheets as the PDF and the command line's SVGs) inline, one per page.
 // Pure, so its shape is unit-tested. No script: the print window runs with JavaScript off.
 
+import { plainText } from '../../engine/index.js';
+
 export const PRINT_CSS_FILE = 'print.css';
 export const FONT_FILES = { regular: 'DejaVuSans.ttf', bold: 'DejaVuSans-Bold.ttf' } as const;
 
@@ -13,14 +15,38 @@ export interface PrintSheet {
 }
 
 function escapeHtml(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+  return plainText(s).replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+}
+
+/** The elements a printout sheet may hold: shapes and text, nothing that runs, loads or embeds. */
+const SHEET_ELEMENTS = new Set(['svg', 'title', 'desc', 'g', 'rect', 'line', 'circle', 'ellipse', 'polyline', 'polygon', 'path', 'text', 'tspan']);
+
+/** Why `svg` may not be printed, or null. Looks at the markup only: a sheet's texts are escaped
+ *  (no `<` in them), so words such as a link named `Feed one=main` are never taken for markup. */
+export function unsafeSheetMarkup(svg: string): string | null {
+  if (/<[!?]/.test(svg)) return 'a comment, CDATA section or processing instruction';
+  for (const m of svg.matchAll(/<[^>]*>?/g)) {
+    const tag = m[0];
+    if (!tag.endsWith('>')) return 'an unclosed tag';
+    const name = /^<\/?([A-Za-z][\w:.-]*)/.exec(tag)?.[1];
+    if (name === undefined) return `a malformed tag ${JSON.stringify(tag.slice(0, 40))}`;
+    if (!SHEET_ELEMENTS.has(name)) return `a <${name}> element`;
+    // The attributes, their quoted values blanked so that nothing inside a value counts.
+    const attributes = tag.replace(/"[^"]*"|'[^']*'/g, '""');
+    const handler = /\s(on[a-z]+)\s*=/i.exec(attributes);
+    if (handler) return `an inline event handler (${handler[1]})`;
+    if (/\s(?:xlink:)?href\s*=/i.test(attributes)) return 'a link (href)';
+    if (/\sstyle\s*=/i.test(attributes)) return 'a style attribute';
+  }
+  return null;
 }
 
 /** An SVG document made fit to sit inside HTML: no XML declaration, sized to its sheet. */
 export function inlineSvg(svg: string): string {
   const body = svg.replace(/^\s*<\?xml[^>]*\?>\s*/, '').trim();
   if (!body.startsWith('<svg')) throw new Error('a printout sheet is not an SVG document');
-  if (/<script|<foreignObject|\son[a-z]+\s*=/i.test(body)) throw new Error('a printout sheet contains script or HTML, which is never printed');
+  const unsafe = unsafeSheetMarkup(body);
+  if (unsafe !== null) throw new Error(`a printout sheet contains ${unsafe}, which is never printed (no script or HTML in a printout)`);
   return body;
 }
 

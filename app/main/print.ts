@@ -8,7 +8,7 @@ import { promises as fs } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { analyse, parseJob, type Job } from '../../engine/index.js';
+import { analyse, parseJob, plainText, type Job } from '../../engine/index.js';
 import { layoutReport, sheetToSvg, type ReportOptions } from '../../engine/report/index.js';
 import { jobToPdf } from '../report/pdf.js';
 import { loadReportFonts, type ReportFonts } from '../report/fonts.js';
@@ -58,7 +58,7 @@ async function jobFrom(jw: JobWindow, text: string, what: string): Promise<Job |
 }
 
 function pdfName(jw: JobWindow, job: Job): string {
-  const base = jw.path ? path.basename(jw.path).replace(/\.lwj$/i, '') : job.job.title.trim() || 'Loopwright job';
+  const base = jw.path ? path.basename(jw.path).replace(/\.lwj$/i, '') : plainText(job.job.title).trim() || 'Loopwright job';
   return `${base.replace(/[\\/:*?"<>|]+/g, '-').slice(0, 120)}.pdf`;
 }
 

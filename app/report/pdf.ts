@@ -3,7 +3,7 @@
 // and the document ID derive from the job, so the same job gives the same bytes.
 
 import PDFDocument from 'pdfkit';
-import { analyse, type Job } from '../../engine/index.js';
+import { analyse, plainText, type Job } from '../../engine/index.js';
 import { layoutReport, type Item, type ReportOptions, type Sheet, type Stroke } from '../../engine/report/index.js';
 import { loadReportFonts, type ReportFonts } from './fonts.js';
 
@@ -61,11 +61,12 @@ function drawItem(doc: PDFKit.PDFDocument, item: Item): void {
       return;
     }
     case 'text': {
-      if (item.text === '') return;
+      const shown = plainText(item.text); // no control characters in the PDF (sanitise.ts)
+      if (shown === '') return;
       doc.font(item.font === 'bold' ? 'LW-Bold' : 'LW-Regular').fontSize(item.size).fillColor(item.color ?? '#000000');
-      const width = item.anchor === 'start' ? 0 : doc.widthOfString(item.text);
+      const width = item.anchor === 'start' ? 0 : doc.widthOfString(shown);
       const x = item.anchor === 'start' ? item.x : item.anchor === 'middle' ? item.x - width / 2 : item.x - width;
-      doc.text(item.text, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
+      doc.text(shown, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
       return;
     }
   }
@@ -80,8 +81,8 @@ export function sheetsToPdf(sheets: Sheet[], meta: { title: string; subject: str
     // the font on every switch to LW-Regular (its cache is keyed by the first name it saw).
     font: null as unknown as string,
     info: {
-      Title: meta.title,
-      Subject: meta.subject,
+      Title: plainText(meta.title),
+      Subject: plainText(meta.subject),
       Creator: 'Loopwright',
       Producer: 'Loopwright',
       CreationDate: meta.date,

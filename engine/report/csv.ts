@@ -6,6 +6,7 @@
 import type { CircuitResult, Results } from '../analysis/results.js';
 import type { Job, Link } from '../model/types.js';
 import { fmtFixes } from './format.js';
+import { csvCell } from './sanitise.js';
 
 function num(v: number | null | undefined): string {
   if (v === null || v === undefined) return '';
@@ -14,7 +15,7 @@ function num(v: number | null | undefined): string {
 
 /** RFC 4180: quote a field holding a comma, a quote or a line break; double inner quotes. */
 export function csvField(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
+  return csvCell(value); // also defuses formulas and drops control characters (sanitise.ts)
 }
 
 const COLUMNS: Array<[string, (c: CircuitResult, l: Link | undefined) => string]> = [

@@ -3,14 +3,16 @@
 
 import type { Item, Sheet, Stroke } from './types.js';
 import { FONT_FAMILY } from './types.js';
+import { xmlText } from './sanitise.js';
 
 function n(v: number): string {
   const r = Math.round(v * 1000) / 1000;
   return Object.is(r, -0) ? '0' : String(r);
 }
 
+/** Escaped, with what XML 1.0 forbids and every control character dropped (sanitise.ts). */
 function esc(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+  return xmlText(s);
 }
 
 function paint(stroke: Stroke | undefined, fill: string | undefined): string {

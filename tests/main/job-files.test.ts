@@ -67,13 +67,14 @@ describe('reading a job file', () => {
 });
 
 describe('saving', () => {
-  it('writes the text and leaves no temporary file behind', async () => {
+  it('writes the text, keeps the previous version as a backup and leaves no temporary file behind', async () => {
     const file = path.join(dir, 'job.lwj');
     await fs.writeFile(file, '{"old":true}');
     const r = await saveJobText(file, '{"new":true}\n', new RefusedFiles());
     expect(r).toEqual({ ok: true, path: file });
     expect(await fs.readFile(file, 'utf8')).toBe('{"new":true}\n');
-    expect(await listing()).toEqual(['job.lwj']);
+    expect(await fs.readFile(`${file}.bak`, 'utf8')).toBe('{"old":true}');
+    expect(await listing()).toEqual(['job.lwj', 'job.lwj.bak']);
   });
 
   it('never writes over a file that failed to load, even with valid text', async () => {

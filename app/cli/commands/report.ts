@@ -2,13 +2,13 @@
 // (annotated diagram, circuit schedule, assumptions) as PDF, and optionally one SVG per sheet.
 // Nothing is written until the whole printout is ready; a bad job writes nothing.
 
-import { existsSync, mkdirSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
+import { existsSync, mkdirSync, realpathSync, statSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { analyse, formatProblem } from '../../../engine/index.js';
 import { layoutReport, sheetToSvg, type ReportOptions } from '../../../engine/report/index.js';
 import type { OptionSpec } from '../args.js';
 import { EXIT, type Command } from '../command.js';
-import { loadJobFile } from '../io.js';
+import { loadJobFile, writeOutputFile } from '../io.js';
 import { exitFor } from './check.js';
 import { summaryLine } from '../format.js';
 
@@ -31,16 +31,10 @@ function samePath(a: string, b: string): boolean {
   }
 }
 
-/** Write through a temporary file in the same folder, then rename: never a half-written file. */
-function writeAtomically(path: string, data: string | Uint8Array): void {
-  const temp = join(dirname(path), `.${basename(path)}.${process.pid}.tmp`);
-  try {
-    writeFileSync(temp, data);
-    renameSync(temp, path);
-  } catch (error) {
-    rmSync(temp, { force: true });
-    throw error;
-  }
+/** Never a half-written file: temporary file flushed and renamed, folder flushed, read-only
+ *  files refused, links written through (writeOutputFile in io.ts). */
+async function writeAtomically(path: string, data: string | Uint8Array): Promise<void> {
+  await writeOutputFile(path, data);
 }
 
 function why(error: unknown): string {
@@ -102,7 +96,7 @@ export const report: Command = {
     }
     try {
       if (existsSync(output) && statSync(output).isDirectory()) throw new Error(`${output} is a directory`);
-      writeAtomically(output, pdf);
+      await writeAtomically(output, pdf);
     } catch (error) {
       err(`report: could not write ${output}: ${why(error)}\n`);
       return EXIT.unusable;
@@ -111,7 +105,7 @@ export const report: Command = {
     if (svgDir !== null) {
       try {
         mkdirSync(svgDir, { recursive: true });
-        sheets.forEach((sheet, i) => writeAtomically(join(svgDir, `sheet-${i + 1}.svg`), sheetToSvg(sheet)));
+        for (const [i, sheet] of sheets.entries()) await writeAtomically(join(svgDir, `sheet-${i + 1}.svg`), sheetToSvg(sheet));
         wrote.push(`${sheets.length} SVG file${sheets.length === 1 ? '' : 's'} in ${svgDir}`);
       } catch (error) {
         err(`report: could not write the SVG sheets into ${svgDir}: ${why(error)}\n`);
