@@ -1,14 +1,14 @@
 // The diagram sheets: the single-line diagram at the user's positions, each link annotated,
 // the worst fault path heavier, continuation marks where a link crosses to another sheet.
 
-import type { CircuitResult, Results } from '../analysis/results.js';
+import type { CircuitResult, Results, SupplyResult } from '../analysis/results.js';
 import type { Job, JobNode, Link } from '../model/types.js';
 import {
   arrowHead, deviceSymbol, GREY, INK, line, nodeSymbol, rcdSymbol, STATUS_COLOR, statusSymbol, stroke, SYMBOL_HALF, text,
 } from './draw.js';
 import { BLOCK, BUS, type DiagramPlan, type Tile } from './diagram-plan.js';
-import { fmtCable, fmtMetre, fmtOhm, fmtRatio, fmtRcd, judgedLoop, STATUS_WORD } from './format.js';
-import { describeSourceShort } from './sources.js';
+import { fmtAmp, fmtCable, fmtDrop, fmtKa, fmtMetre, fmtPlain, fmtOhm, fmtRatio, fmtRcd, judgedLoop, STATUS_WORD, verdictNote } from './format.js';
+import { describeHeadroomShort, describeSourceShort } from './sources.js';
 import { textWidth, truncate, wrap } from './text.js';
 import type { Item, Stroke, TextItem } from './types.js';
 
@@ -17,7 +17,6 @@ export const LABEL_TEXT = 2.2;
 const LH = 2.75;
 const LABEL_X = 2;
 const LABEL_W = BLOCK.right - LABEL_X;
-const FIRST_BASELINE = -15.1;
 
 export interface Ctx {
   job: Job;
@@ -30,6 +29,9 @@ export interface Ctx {
   worstEnd: string | null;
   worstRatio: number | null;
   u0: number;
+  /** The maximum prospective fault current at each node that has a link leaving it, A. */
+  faultAt: Map<string, number | null>;
+  supplies: Map<string, SupplyResult>;
   /** Sheet number of diagram tile i. */
   sheetOf: (tile: number) => number;
 }
@@ -45,36 +47,71 @@ function at(ctx: Ctx, id: string, tile: Tile): { x: number; y: number } {
   return { x: p.x + tile.dx, y: p.y + tile.dy };
 }
 
-/** The five label lines of a link, right of its drop line, above its far node at (x, y). */
+/** Spacing of a link label's lines, mm: up to seven lines between the drop's device and the node. */
+const LABEL_LH = 2.5;
+/** Baseline of a label's last line, relative to the far node's centre. */
+const LAST_BASELINE = -4.1;
+
+/** `Ib 16 A · ΔU 3.08 ≤ 5.00 %`, the load line of a link with a design current; null without one. */
+export function loadLine(c: CircuitResult): string | null {
+  if (c.designCurrent === null) return null;
+  const ib = `Ib ${fmtAmp(c.designCurrent)} A`;
+  if (c.voltageDropTotal === null) return ib;
+  if (c.voltageDropLimit === null) return `${ib} · ΔU ${fmtDrop(c.voltageDropTotal)} %`;
+  const sign = c.voltageStatus === 'fail' ? '>' : '≤';
+  return `${ib} · ΔU ${fmtDrop(c.voltageDropTotal)} ${sign} ${fmtPlain(Number(c.voltageDropLimit.toFixed(2)))} %`;
+}
+
+/**
+ * The label of a link, right of its drop line and above its far node at (x, y), bottom-aligned,
+ * line by line: id and name; device and RCD; cable and length; Ib and the total drop against its
+ * limit (when Ib is known); the loop against its limit; the loop status and share of the limit;
+ * and the verdict naming the failed checks when it says more than the loop status.
+ */
 export function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
   const c = ctx.byLink.get(link.id);
   const items: Item[] = [];
   const lx = x + LABEL_X;
-  const base = (k: number): number => y + FIRST_BASELINE + k * LH;
+  const load = c !== undefined ? loadLine(c) : null;
+  const verdict = c !== undefined ? verdictNote(c, true) : null;
+  const count = 3 + (c !== undefined ? 2 : 0) + (load !== null ? 1 : 0) + (verdict !== null ? 1 : 0);
+  let k = 0;
+  const next = (): number => y + LAST_BASELINE - (count - 1 - k++) * LABEL_LH;
   const idW = textWidth(`${link.id} `, 'bold', LABEL_TEXT);
-  items.push(text(lx, base(0), link.id, LABEL_TEXT, 'bold'));
+  const b0 = next();
+  items.push(text(lx, b0, link.id, LABEL_TEXT, 'bold'));
   if (link.name !== undefined && link.name !== '') {
-    items.push(text(lx + idW, base(0), truncate(link.name, 'regular', LABEL_TEXT, LABEL_W - idW), LABEL_TEXT));
+    items.push(text(lx + idW, b0, truncate(link.name, 'regular', LABEL_TEXT, LABEL_W - idW), LABEL_TEXT));
   }
   let device: string;
   if (c === undefined || c.protectedBy === null) device = 'no protective device';
   else if (c.protectedBy !== link.id) device = `protected by ${c.protectedBy} (${c.device ?? ''})`;
   else device = [c.device ?? '', fmtRcd(link) !== '' ? `RCD ${fmtRcd(link)}` : ''].filter((s) => s !== '').join(' · ');
-  items.push(text(lx, base(1), truncate(device, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
-  items.push(text(lx, base(2), truncate(`${fmtCable(link.cable)} · ${fmtMetre(link.cable.length)} m`, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+  items.push(text(lx, next(), truncate(device, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+  items.push(text(lx, next(), truncate(`${fmtCable(link.cable)} · ${fmtMetre(link.cable.length)} m`, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
   if (c !== undefined) {
+    if (load !== null) {
+      const color = c.voltageStatus === 'fail' ? STATUS_COLOR.fail : undefined;
+      items.push(text(lx, next(), truncate(load, c.voltageStatus === 'fail' ? 'bold' : 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT, c.voltageStatus === 'fail' ? 'bold' : 'regular', 'start', color));
+    }
     const loop = judgedLoop(c);
     let loopText: string;
     if (loop.value === null) loopText = c.zs !== null ? `Zs ${fmtOhm(c.zs)} Ω` : 'loop not computed';
     else if (c.limit === null) loopText = `${loop.label} ${fmtOhm(loop.value)} Ω, no limit`;
     else loopText = `${loop.label} ${fmtOhm(loop.value)} ${loop.value <= c.limit ? '≤' : '>'} ${fmtOhm(c.limit)} Ω`;
-    items.push(text(lx, base(3), truncate(loopText, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
-    items.push(...statusSymbol(c.status, lx + 1.2, base(4) - 0.8, 2.2));
+    items.push(text(lx, next(), truncate(loopText, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
+    const bs = next();
+    items.push(...statusSymbol(c.status, lx + 1.2, bs - 0.8, 2.2));
     const word = STATUS_WORD[c.status];
-    items.push(text(lx + 3, base(4), word, LABEL_TEXT, 'bold', 'start', STATUS_COLOR[c.status]));
+    items.push(text(lx + 3, bs, word, LABEL_TEXT, 'bold', 'start', STATUS_COLOR[c.status]));
     if (c.ratio !== null) {
       const wW = textWidth(`${word} `, 'bold', LABEL_TEXT);
-      items.push(text(lx + 3 + wW, base(4), `· ${fmtRatio(c.ratio)} of limit`, LABEL_TEXT));
+      items.push(text(lx + 3 + wW, bs, truncate(`· ${fmtRatio(c.ratio)} of limit`, 'regular', LABEL_TEXT, LABEL_W - 3 - wW), LABEL_TEXT));
+    }
+    if (verdict !== null) {
+      const bv = next();
+      items.push(...statusSymbol(c.verdict, lx + 1.2, bv - 0.8, 2.2));
+      items.push(text(lx + 3, bv, truncate(verdict, 'bold', LABEL_TEXT, LABEL_W - 3), LABEL_TEXT, 'bold', 'start', STATUS_COLOR[c.verdict]));
     }
   }
   return items;
@@ -109,9 +146,9 @@ function nameLines(name: string, firstW: number, restW: number, max: number): st
 }
 
 /**
- * The node's symbol and its id and name (on up to three lines) to the right, with one line kept
- * for `extra` (a stub's or a continued head's note, in bold), the worst-path mark, or the supply's
- * source.
+ * The node's symbol and its id and name (on up to three lines) to the right, with lines kept for
+ * `extra` (a stub's or a continued head's note, in bold), the worst-path mark, a board's fault
+ * level, or the supply's source and headroom; the name gives way first.
  */
 export function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number, extra?: string): Item[] {
   const items: Item[] = nodeSymbol(node.kind, x, y);
@@ -119,21 +156,51 @@ export function nodeBlock(ctx: Ctx, node: JobNode, x: number, y: number, extra?:
   const width = x + BLOCK.right - nx;
   const idW = textWidth(`${node.id} `, 'bold', LABEL_TEXT);
   items.push(text(nx, y + 0.8, truncate(node.id, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
-  const worst = ctx.worstEnd === node.id;
-  const reserved = (extra !== undefined ? 1 : 0) + (worst || node.kind === 'supply' ? 1 : 0);
-  const names = nameLines(node.name ?? '', width - idW, width, Math.max(1, 3 - reserved));
+  // The lines below the name: the stub's note and the worst-path mark always (as many as fit),
+  // then a board's fault level, or the supply's headroom and source, which give way to the name.
+  type Line = { text: string; bold: boolean; color?: string; order: number };
+  const must: Line[] = [];
+  if (extra !== undefined) must.push({ text: extra, bold: true, order: 0 });
+  if (ctx.worstEnd === node.id) must.push({ text: 'worst fault path', bold: true, order: 1 });
+  const optional: Line[] = [];
+  if (node.kind === 'board') {
+    const level = ctx.faultAt.get(node.id) ?? null;
+    if (level !== null) optional.push({ text: `Ik max ${fmtKa(level)} kA`, bold: false, color: GREY, order: 2 });
+  }
+  if (node.kind === 'supply' && extra === undefined) {
+    const head = describeHeadroomShort(node, ctx.supplies.get(node.id));
+    if (head !== null) optional.push({ text: head, bold: false, color: GREY, order: 4 });
+    optional.push({ text: describeSourceShort(node.source, ctx.u0), bold: false, color: GREY, order: 3 });
+  }
+  // A board's fault level beside its id, the name below on up to two lines, when that keeps it whole.
+  if (node.kind === 'board' && optional.length === 1 && must.length === 0) {
+    const below = nameLines(node.name ?? '', width, width, 2);
+    const level = optional[0];
+    const ikW = textWidth(level?.text ?? '', 'regular', LABEL_TEXT);
+    if (level !== undefined && !below.some((l) => l.endsWith('…')) && idW + ikW <= width) {
+      items.push(text(nx + idW, y + 0.8, level.text, LABEL_TEXT, 'regular', 'start', GREY));
+      below.forEach((l, i) => {
+        if (l !== '') items.push(text(nx, y + 0.8 + (i + 1) * LH, l, LABEL_TEXT));
+      });
+      return items;
+    }
+  }
+  let reserved = Math.min(must.length + optional.length, 2);
+  let names = nameLines(node.name ?? '', width - idW, width, Math.max(1, 3 - reserved));
+  while (reserved > must.length && names.some((l) => l.endsWith('…'))) {
+    reserved--;
+    names = nameLines(node.name ?? '', width - idW, width, Math.max(1, 3 - reserved));
+  }
   names.forEach((l, i) => {
     if (l !== '') items.push(text(i === 0 ? nx + idW : nx, y + 0.8 + i * LH, l, LABEL_TEXT));
   });
   let lineNo = Math.max(1, names.length);
-  if (extra !== undefined) {
-    items.push(text(nx, y + 0.8 + lineNo * LH, truncate(extra, 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
+  const room = Math.max(0, 3 - lineNo);
+  const shown = [...must, ...optional].slice(0, Math.max(room, must.length)).sort((p, q) => p.order - q.order);
+  for (const l of shown) {
+    const font = l.bold ? 'bold' : 'regular';
+    items.push(text(nx, y + 0.8 + lineNo * LH, truncate(l.text, font, LABEL_TEXT, width), LABEL_TEXT, font, 'start', l.color));
     lineNo++;
-  }
-  if (worst) {
-    items.push(text(nx, y + 0.8 + lineNo * LH, truncate('worst fault path', 'bold', LABEL_TEXT, width), LABEL_TEXT, 'bold'));
-  } else if (node.kind === 'supply' && lineNo < 3 && extra === undefined) {
-    items.push(text(nx, y + 0.8 + lineNo * LH, truncate(describeSourceShort(node.source, ctx.u0), 'regular', LABEL_TEXT, width), LABEL_TEXT, 'regular', 'start', GREY));
   }
   return items;
 }
@@ -290,6 +357,9 @@ export function diagramContext(job: Job, results: Results, plan: DiagramPlan, sh
   path.forEach((id, i) => (i % 2 === 1 ? worstLinks : worstNodes).add(id));
   const children = new Map<string, Link[]>();
   for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l]);
+  // A link's fault level is at its origin: the fault level of the node it leaves.
+  const faultAt = new Map<string, number | null>();
+  for (const c of results.circuits) if (c.faultLevel !== null && !faultAt.has(c.from)) faultAt.set(c.from, c.faultLevel);
   return {
     job,
     plan,
@@ -300,6 +370,8 @@ export function diagramContext(job: Job, results: Results, plan: DiagramPlan, sh
     worstNodes,
     worstEnd: path.length > 0 ? (path[path.length - 1] ?? null) : null,
     worstRatio: results.worst?.ratio ?? null,
+    faultAt,
+    supplies: new Map(results.supplies.map((r) => [r.node, r])),
     sheetOf,
     u0,
   };

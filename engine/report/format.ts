@@ -141,24 +141,25 @@ export const CHECK_NAME = {
 } as const;
 
 /** The checks other than the loop that fail (or, for the reading, rely on an RCD), named in words. */
-export function otherFailures(c: CircuitResult): string[] {
+export function otherFailures(c: CircuitResult, short = false): string[] {
   const out: string[] = [];
-  if (c.voltageStatus === 'fail') out.push('voltage drop');
+  if (c.voltageStatus === 'fail') out.push(short ? 'drop' : 'voltage drop');
   if (c.capacityStatus === 'fail') out.push('capacity');
-  if (c.breakingStatus === 'fail') out.push('breaking capacity');
-  if (c.withstandStatus === 'fail') out.push('earth withstand');
-  if (c.measured !== null && (c.measured.status === 'fail' || c.measured.status === 'rcd')) out.push('measured reading');
+  if (c.breakingStatus === 'fail') out.push(short ? 'breaking' : 'breaking capacity');
+  if (c.withstandStatus === 'fail') out.push(short ? 'withstand' : 'earth withstand');
+  if (c.measured !== null && (c.measured.status === 'fail' || c.measured.status === 'rcd')) out.push(short ? 'reading' : 'measured reading');
   return out;
 }
 
 /**
  * The verdict with the checks that decide it, when it says more than the loop status:
- * `FAIL: voltage drop, capacity`, `RCD-RELIANT: measured reading`; null when the loop status says it all.
+ * `FAIL: voltage drop, capacity`, `RCD-RELIANT: measured reading`; null when the loop status says
+ * it all. `short` words the checks briefly for a diagram label (`FAIL: drop, breaking`).
  */
-export function verdictNote(c: CircuitResult): string | null {
-  const others = otherFailures(c);
+export function verdictNote(c: CircuitResult, short = false): string | null {
+  const others = otherFailures(c, short);
   if (c.verdict === c.status && others.length === 0) return null;
-  const loop = c.status === 'fail' ? ['loop'] : c.status === 'rcd' ? ['loop (relies on the RCD)'] : [];
+  const loop = c.status === 'fail' ? ['loop'] : c.status === 'rcd' ? [short ? 'loop (RCD)' : 'loop (relies on the RCD)'] : [];
   const reasons = [...loop, ...others];
   return reasons.length > 0 ? `${STATUS_WORD[c.verdict]}: ${reasons.join(', ')}` : STATUS_WORD[c.verdict];
 }

@@ -1,8 +1,9 @@
 // layoutReport: the whole printout as sheets — diagram sheets, then the circuit schedule, then
-// the assumptions — each with the border and title block. Pure: the same job gives the same list.
+// the assumptions, then (when asked) the test sheets; or the test sheets alone — each with the
+// border and title block. Pure: the same job gives the same list.
 
 import type { Results } from '../analysis/results.js';
-import { resolveRules } from '../analysis/basis.js';
+import { resolveRules, type ResolvedRules } from '../analysis/basis.js';
 import type { Job } from '../model/types.js';
 import { assumptionPages, BASIS_TITLE } from './assumptions.js';
 import { diagramContext, drawTile } from './diagram.js';
@@ -11,9 +12,10 @@ import { drawPiece } from './diagram-sheet.js';
 import { planSections } from './diagram-pack.js';
 import { GREY, text } from './draw.js';
 import { keyLine, legend } from './legend.js';
-import { contentBox, paperFor, type Box } from './paper.js';
+import { contentBox, paperFor, type Box, type Paper } from './paper.js';
 import { schedulePages } from './schedule.js';
-import { titleBlock } from './title-block.js';
+import { testSheetPages } from './test-sheet.js';
+import { CAUTION_SHORT_HERE, titleBlock } from './title-block.js';
 import type { Item, ReportOptions, Sheet, SheetKind } from './types.js';
 
 /** Band kept free above and below the diagram for continuation marks, mm. */
@@ -24,6 +26,13 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
   const rules = resolveRules(job.rules);
   const content = contentBox(paper);
   const pages: Array<{ kind: SheetKind; title: string; items: Item[] }> = [];
+  const tests = (): void => {
+    for (const t of testSheetPages(job, results, rules, caution, content)) pages.push({ kind: 'test', title: t.title, items: t.items });
+  };
+  if (options.testSheet === 'only') {
+    tests();
+    return finish(job, rules, paper, pages);
+  }
 
   // Diagram: the legend along the foot of the content area, the drawing above it.
   const sectionNote = (auto: boolean, sheets = 2): string =>
@@ -57,7 +66,7 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
   const legendAfter = sections !== null && sections.legendSheet === null;
   const assumptions = assumptionPages(job, rules, caution, content, legendAfter
     ? { height: legend(legendBox(0), notes).height, draw: (top) => legend(legendBox(top), notes).items }
-    : undefined);
+    : undefined, results);
   const legendSheetNo = sections === null ? 0 : sections.legendSheet !== null ? sections.legendSheet + 1 : count + schedule.length + assumptions.length;
 
   for (let t = 0; t < count; t++) {
@@ -85,7 +94,13 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
     const title = assumptions.length > 1 ? `Assumptions, part ${i + 1} of ${assumptions.length}` : 'Assumptions and caution';
     pages.push({ kind: 'assumptions', title: legendAfter && i === assumptions.length - 1 ? `${title}; legend of the diagram` : title, items });
   });
+  // After the assumptions, so the sheet numbers above (the legend's) stay as they are.
+  if (options.testSheet === 'include') tests();
+  return finish(job, rules, paper, pages);
+}
 
+/** Every page as a sheet with its border and title block, "sheet n of m". */
+function finish(job: Job, rules: ResolvedRules, paper: Paper, pages: Array<{ kind: SheetKind; title: string; items: Item[] }>): Sheet[] {
   return pages.map((p, i) => ({
     widthMm: paper.widthMm,
     heightMm: paper.heightMm,
@@ -99,6 +114,7 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
         sheetTitle: p.title,
         sheet: i + 1,
         sheets: pages.length,
+        ...(p.kind === 'test' ? { caution: CAUTION_SHORT_HERE } : {}),
       }),
     ],
   }));

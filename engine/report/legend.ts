@@ -47,7 +47,11 @@ function entries(): Array<{ glyph: Glyph; label: string; bold?: string }> {
 const KEY =
   'Label beside each link, line by line: link id and name; device (mark or label) and RCD; cable active/earth mm² ' +
   'and material, route length; loop impedance against its limit in Ω: Zs (the whole loop, source known) or own ' +
-  '(from the protecting device, source unknown, 80 % share of the budget); status and the share of the limit used.';
+  '(from the protecting device, source unknown, 80 % share of the budget); status and the share of the limit used. ' +
+  'Where a load is known, a line above the loop gives the design current Ib and the total voltage drop from the supply ' +
+  '(ΔU, % of U0) against its limit; a last line gives the verdict of every check when it says more than the loop ' +
+  'status, naming the checks that fail. A board shows its maximum prospective fault current (Ik max); the supply its ' +
+  'source and headroom (the largest source impedance for which every circuit passes, and the circuit that sets it).';
 
 /** Legend items filling `box.w`, with its top at `box.y`; returns the items and the height used. */
 export function legend(box: Box, notes: string[]): { items: Item[]; height: number } {
@@ -92,8 +96,8 @@ export function legend(box: Box, notes: string[]): { items: Item[]; height: numb
  */
 export function keyLine(box: Box, where: string): { items: Item[]; height: number } {
   const variants = [
-    `Key: the legend on ${where} explains every symbol and line style. Label beside each link, line by line: id and name · device, RCD · cable, length · loop against its limit (Ω) · status, share of the limit.`,
-    `Key: the legend on ${where} explains every symbol. Link label: id, name · device, RCD · cable, length · loop vs limit (Ω) · status.`,
+    `Key: the legend on ${where} explains every symbol and line style. Label beside each link, line by line: id and name · device, RCD · cable, length · Ib, drop against its limit · loop against its limit (Ω) · status, share of the limit · verdict.`,
+    `Key: the legend on ${where} explains every symbol. Link label: id, name · device, RCD · cable, length · Ib, drop · loop vs limit (Ω) · status · verdict.`,
     `Key: see the legend on ${where} for every symbol and the link label.`,
   ];
   const line1 = variants.find((v) => textWidth(v, 'regular', T) <= box.w - 3) ?? variants[variants.length - 1] ?? '';

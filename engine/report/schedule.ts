@@ -1,11 +1,12 @@
-// The circuit schedule: one row per link, inputs then results, failures first, the column
-// heads repeated on every sheet.
+// The circuit schedule: one row per link, inputs, the loop, then every other check with the
+// verdict, fixes and notes; failures first by verdict; the column heads repeated on every sheet.
 
-import type { CircuitResult, Results } from '../analysis/results.js';
+import type { CircuitResult, Results, Status } from '../analysis/results.js';
 import type { Job, Link } from '../model/types.js';
 import { GREY, STATUS_COLOR, statusSymbol, stroke, text } from './draw.js';
 import {
-  fmtAmp, fmtCable, fmtMetre, fmtOhm, fmtRatio, fmtRcd, fmtSec, ROLE_SHORT, scheduleOrder, STATUS_WORD,
+  fmtAmp, fmtArea, fmtCable, fmtDrop, fmtFixes, fmtKa, fmtMetre, fmtOhm, fmtPf, fmtRatio, fmtRcd, fmtSec, ROLE_SHORT, STATUS_WORD,
+  verdictOrder,
 } from './format.js';
 import type { Box } from './paper.js';
 import { textWidth, truncate, wrap } from './text.js';
@@ -17,6 +18,8 @@ interface Column {
   numeric?: boolean;
   /** May wrap onto several lines; gives up width first. */
   flexible?: boolean;
+  /** A status cell: drawn with its symbol, in bold and its colour, beside the word. */
+  status?: (c: CircuitResult) => Status | null;
   value: (c: CircuitResult, link: Link | undefined) => string;
 }
 
@@ -24,32 +27,76 @@ export function scheduleNotes(c: CircuitResult, results: Results): string[] {
   return results.worst?.link === c.link ? ['Worst fault path.', ...c.notes] : c.notes;
 }
 
-function columns(results: Results): Column[] {
+/** `3.21 / 5.00`, or the total alone for a link with no limit. */
+function totalDrop(c: CircuitResult): string {
+  if (c.voltageDropTotal === null) return '—';
+  return c.voltageDropLimit === null ? fmtDrop(c.voltageDropTotal) : `${fmtDrop(c.voltageDropTotal)} / ${fmtDrop(c.voltageDropLimit)}`;
+}
+
+function check(head: string, pick: (c: CircuitResult) => Status | null): Column {
+  return { head, status: pick, value: (c) => { const st = pick(c); return st === null ? '' : STATUS_WORD[st]; } };
+}
+
+/**
+ * The columns in sections, each section kept whole on one table: inputs, the loop, load and
+ * voltage drop, fault level and withstand, and the test limit with the verdict, fixes and notes.
+ */
+function sections(results: Results): Column[][] {
   return [
-    { head: 'Link', value: (c) => c.link },
-    { head: 'Name', flexible: true, value: (c) => c.name ?? '' },
-    { head: 'From', flexible: true, value: (c) => c.from },
-    { head: 'To', flexible: true, value: (c) => c.to },
-    { head: 'Role', value: (c) => ROLE_SHORT[c.role] },
-    { head: 'Cable (mm²)', value: (_c, l) => (l === undefined ? '' : fmtCable(l.cable)) },
-    { head: 'Length (m)', numeric: true, value: (_c, l) => (l === undefined ? '' : fmtMetre(l.cable.length)) },
-    { head: 'Device', flexible: true, value: (c) => (c.protectedBy === null ? 'none' : c.protectedBy === c.link ? (c.device ?? '') : `by ${c.protectedBy}`) },
-    { head: 'RCD', value: (_c, l) => (l === undefined ? '' : fmtRcd(l) || '—') },
-    { head: 'Method', value: (c) => (c.method === 'known-source' ? 'known Ze' : c.method === 'unknown-source' ? '80 %' : 'no supply') },
-    { head: 'Zs (Ω)', numeric: true, value: (c) => fmtOhm(c.zs) },
-    { head: 'Own (Ω)', numeric: true, value: (c) => fmtOhm(c.own) },
-    { head: 'Upstream (Ω)', numeric: true, value: (c) => fmtOhm(c.upstream) },
-    { head: 'Limit (Ω)', numeric: true, value: (c) => fmtOhm(c.limit) },
-    { head: 'Ia (A)', numeric: true, value: (c) => fmtAmp(c.tripCurrent) },
-    { head: 't req (s)', numeric: true, value: (c) => fmtSec(c.requiredTime) },
-    { head: 'If (A)', numeric: true, value: (c) => fmtAmp(c.faultCurrent) },
-    { head: 'Clearing (s)', numeric: true, value: (c) => fmtSec(c.clearingTime) },
-    { head: 'Ratio (% of limit)', numeric: true, value: (c) => fmtRatio(c.ratio) },
-    { head: 'Max length (m)', numeric: true, value: (c) => fmtMetre(c.maxLength) },
-    { head: 'Status', value: (c) => STATUS_WORD[c.status] },
-    { head: 'Notes', flexible: true, value: (c) => scheduleNotes(c, results).join(' ') },
+    [
+      { head: 'Name', flexible: true, value: (c) => c.name ?? '' },
+      { head: 'From', flexible: true, value: (c) => c.from },
+      { head: 'To', flexible: true, value: (c) => c.to },
+      { head: 'Role', value: (c) => ROLE_SHORT[c.role] },
+      { head: 'Ph', numeric: true, value: (c) => String(c.phases) },
+      { head: 'Cable (mm²)', value: (_c, l) => (l === undefined ? '' : fmtCable(l.cable)) },
+      { head: 'Length (m)', numeric: true, value: (_c, l) => (l === undefined ? '' : fmtMetre(l.cable.length)) },
+      { head: 'Device', flexible: true, value: (c) => (c.protectedBy === null ? 'none' : c.protectedBy === c.link ? (c.device ?? '') : `by ${c.protectedBy}`) },
+      { head: 'RCD', value: (_c, l) => (l === undefined ? '' : fmtRcd(l) || '—') },
+    ],
+    [
+      { head: 'Method', value: (c) => (c.method === 'known-source' ? 'known Ze' : c.method === 'unknown-source' ? '80 %' : 'no supply') },
+      { head: 'Zs (Ω)', numeric: true, value: (c) => fmtOhm(c.zs) },
+      { head: 'Own (Ω)', numeric: true, value: (c) => fmtOhm(c.own) },
+      { head: 'Upstream (Ω)', numeric: true, value: (c) => fmtOhm(c.upstream) },
+      { head: 'Limit (Ω)', numeric: true, value: (c) => fmtOhm(c.limit) },
+      { head: 'Ia (A)', numeric: true, value: (c) => fmtAmp(c.tripCurrent) },
+      { head: 't req (s)', numeric: true, value: (c) => fmtSec(c.requiredTime) },
+      { head: 'If (A)', numeric: true, value: (c) => fmtAmp(c.faultCurrent) },
+      { head: 'Clearing (s)', numeric: true, value: (c) => fmtSec(c.clearingTime) },
+      { head: 'Ratio (% of limit)', numeric: true, value: (c) => fmtRatio(c.ratio) },
+      { head: 'Max length (m)', numeric: true, value: (c) => fmtMetre(c.maxLength) },
+      check('Status', (c) => c.status),
+    ],
+    [
+      { head: 'Ib (A)', numeric: true, value: (c) => fmtAmp(c.designCurrent) },
+      { head: 'cos φ', numeric: true, value: (c) => fmtPf(c.powerFactor) },
+      { head: 'Drop (%)', numeric: true, value: (c) => fmtDrop(c.voltageDrop) },
+      { head: 'Total / limit (%)', numeric: true, value: totalDrop },
+      check('Voltage', (c) => c.voltageStatus),
+      { head: 'Iz (A)', numeric: true, value: (c) => fmtAmp(c.capacity) },
+      check('Capacity', (c) => c.capacityStatus),
+    ],
+    [
+      { head: 'Fault level (kA)', numeric: true, value: (c) => fmtKa(c.faultLevel) },
+      check('Breaking', (c) => c.breakingStatus),
+      { head: 'Earth min (mm²)', numeric: true, value: (c) => fmtArea(c.earthMinArea) },
+      check('Withstand', (c) => c.withstandStatus),
+    ],
+    [
+      { head: 'Test limit (Ω)', numeric: true, value: (c) => fmtOhm(c.testLimit) },
+      { head: 'Reading → corrected (Ω)', numeric: true, value: (c) => (c.measured === null ? '' : `${fmtOhm(c.measured.zs)} → ${fmtOhm(c.measured.corrected)}`) },
+      check('Measured', (c) => c.measured?.status ?? null),
+      check('Verdict', (c) => c.verdict),
+      { head: 'Fixes', flexible: true, value: (c) => fmtFixes(c) },
+      { head: 'Notes', flexible: true, value: (c) => scheduleNotes(c, results).join(' ') },
+    ],
   ];
 }
+
+const LINK: Column = { head: 'Link', value: (c) => c.link };
+/** What each table is called when the schedule is split, by the first section it holds. */
+const PART_NAME = ['inputs', 'loop', 'load and voltage drop', 'fault level and withstand', 'test limit, verdict and fixes'];
 
 const PAD = 0.8;
 const STATUS_SYMBOL_W = 3;
@@ -58,9 +105,10 @@ const STATUS_SYMBOL_W = 3;
 function widths(cols: Column[], rows: string[][], width: number, size: number): number[] {
   const natural = cols.map((col, i) => {
     const headWord = Math.max(...col.head.split(' ').map((w) => textWidth(w, 'bold', size)));
-    const content = Math.max(0, ...rows.map((r) => textWidth(r[i] ?? '', col.head === 'Status' || i === 0 ? 'bold' : 'regular', size)));
-    const extra = col.head === 'Status' ? STATUS_SYMBOL_W : 0;
-    return Math.max(headWord, col.flexible === true ? Math.min(content, 45) : content) + 2 * PAD + extra;
+    const content = Math.max(0, ...rows.map((r) => textWidth(r[i] ?? '', col.status !== undefined || i === 0 ? 'bold' : 'regular', size)));
+    const extra = col.status !== undefined ? STATUS_SYMBOL_W : 0;
+    // + 0.1 mm: a head word exactly as wide as its column must not wrap on rounding.
+    return Math.max(headWord, col.flexible === true ? Math.min(content, 45) : content) + 2 * PAD + extra + 0.1;
   });
   const notes = cols.length - 1;
   const fixed = natural.reduce((s, w, i) => s + (i === notes ? 0 : w), 0);
@@ -85,27 +133,30 @@ export interface SchedulePage {
   items: Item[];
 }
 
-/** The schedule as pages of items, each page filling `box`. */
+/**
+ * The schedule as pages of items, each page filling `box`: one table when every column fits,
+ * else the sections packed in order into as few tables as fit, each row led by its link id.
+ */
 export function schedulePages(job: Job, results: Results, box: Box): Item[][] {
   const size = box.w >= 380 ? 2.2 : 2;
-  const all = columns(results);
+  const secs = sections(results);
   const links = new Map(job.links.map((l) => [l.id, l]));
-  const ordered = scheduleOrder(results.circuits);
-  const cells = ordered.map((c) => all.map((col) => col.value(c, links.get(c.link))));
-  const ws = widths(all, cells, box.w, size);
-  if (ws.reduce((a, w) => a + w, 0) <= box.w + 0.01) return table(results, ordered, all, cells, ws, box, size, '');
-  // Too narrow for one table: inputs, then results, each row led by its link id.
-  const split = all.findIndex((c) => c.head === 'Method');
-  const groups = [[0, ...range(1, split)], [0, ...range(split, all.length)]];
-  return groups.flatMap((g, k) => {
-    const cols = g.map((i) => all[i]).filter((c): c is Column => c !== undefined);
-    const sub = cells.map((row) => g.map((i) => row[i] ?? ''));
-    return table(results, ordered, cols, sub, widths(cols, sub, box.w, size), box, size, k === 0 ? ', inputs' : ', results');
+  const ordered = verdictOrder(results.circuits);
+  const cellsOf = (cols: Column[]): string[][] => ordered.map((c) => cols.map((col) => col.value(c, links.get(c.link))));
+  const fits = (cols: Column[]): boolean => widths(cols, cellsOf(cols), box.w, size).reduce((a, w) => a + w, 0) <= box.w + 0.01;
+  // Greedy: each table takes the next sections while they still fit.
+  const groups: number[][] = [];
+  for (let k = 0; k < secs.length; k++) {
+    const last = groups[groups.length - 1];
+    if (last !== undefined && fits([LINK, ...[...last, k].flatMap((i) => secs[i] ?? [])])) last.push(k);
+    else groups.push([k]);
+  }
+  return groups.flatMap((g) => {
+    const cols = [LINK, ...g.flatMap((i) => secs[i] ?? [])];
+    const cells = cellsOf(cols);
+    const part = groups.length === 1 ? '' : `, ${g.map((i) => PART_NAME[i] ?? '').join(', ')}`;
+    return table(results, ordered, cols, cells, widths(cols, cells, box.w, size), box, size, part);
   });
-}
-
-function range(from: number, to: number): number[] {
-  return Array.from({ length: Math.max(0, to - from) }, (_, i) => from + i);
 }
 
 function table(
@@ -118,7 +169,8 @@ function table(
   const headLines = cols.map((col, i) => wrap(col.head, 'bold', size, (ws[i] ?? 10) - 2 * PAD, 3));
   const headH = Math.max(...headLines.map((l) => l.length)) * lh + 1.6;
   const s = results.summary;
-  const title = truncate(`Circuit schedule${part}: ${results.circuits.length} links (${s.fail} fail, ${s.rcd} RCD, ${s.pass} pass, ${s.unchecked} unchecked), failures first, then by share of the limit, unchecked last`, 'bold', 2.6, box.w);
+  const v = s.verdict;
+  const title = truncate(`Circuit schedule${part}: ${results.circuits.length} links, verdicts ${v.fail} fail, ${v.rcd} RCD, ${v.pass} pass, ${v.unchecked} unchecked (loop ${s.fail} fail, ${s.rcd} RCD, ${s.pass} pass); failures first by verdict, then by share of the loop limit`, 'bold', 2.6, box.w);
 
   const pages: Item[][] = [];
   let page: Item[] = [];
@@ -141,7 +193,7 @@ function table(
   startPage();
   ordered.forEach((c, r) => {
     const lines = cols.map((col, i) => {
-      const w = (ws[i] ?? 10) - 2 * PAD - (col.head === 'Status' ? STATUS_SYMBOL_W : 0);
+      const w = (ws[i] ?? 10) - 2 * PAD - (col.status !== undefined ? STATUS_SYMBOL_W : 0);
       return col.flexible === true ? wrap(cells[r]?.[i] ?? '', 'regular', size, w) : wrap(cells[r]?.[i] ?? '', 'regular', size, w, 1);
     });
     const rowH = Math.max(...lines.map((l) => l.length)) * lh + 1.2;
@@ -149,12 +201,12 @@ function table(
     if (r % 2 === 1) page.push({ kind: 'rect', x: box.x, y, w: box.w, h: rowH, fill: '#f2f2f2' });
     lines.forEach((ls, i) => {
       const col = cols[i];
-      const isStatus = col?.head === 'Status';
-      if (isStatus) page.push(...statusSymbol(c.status, (xs[i] ?? 0) + PAD + 1.2, y + 0.6 + lh * 0.8 - size * 0.36, size));
+      const st = col?.status?.(c) ?? null;
+      if (st !== null) page.push(...statusSymbol(st, (xs[i] ?? 0) + PAD + 1.2, y + 0.6 + lh * 0.8 - size * 0.36, size));
       ls.forEach((l, k) => {
         const base = y + 0.6 + lh * (k + 0.8);
         if (col?.numeric === true) page.push(text((xs[i] ?? 0) + (ws[i] ?? 0) - PAD, base, l, size, 'regular', 'end'));
-        else if (isStatus) page.push(text((xs[i] ?? 0) + PAD + STATUS_SYMBOL_W, base, l, size, 'bold', 'start', STATUS_COLOR[c.status]));
+        else if (st !== null) page.push(text((xs[i] ?? 0) + PAD + STATUS_SYMBOL_W, base, l, size, 'bold', 'start', STATUS_COLOR[st]));
         else page.push(text((xs[i] ?? 0) + PAD, base, l, size, i === 0 ? 'bold' : 'regular'));
       });
     });

@@ -64,6 +64,7 @@ export function describeSourceLong(source: Source, u0: number, share: number): s
 export function describeHeadroomShort(supply: SupplyNode, result: SupplyResult | undefined): string | null {
   if (result === undefined || result.maxZe === null) return null;
   const by = result.setBy !== null ? ` (${result.setBy})` : '';
+  if (result.maxZe <= 0) return `no Ze headroom${by}`;
   if (supply.source.type === 'unknown') return `ask for Ze ≤ ${fmtOhm(result.maxZe)} Ω${by}`;
   return `max Ze ${fmtOhm(result.maxZe)} Ω${by}`;
 }

@@ -20,7 +20,14 @@ export interface TitleInfo {
   sheetTitle: string;
   sheet: number;
   sheets: number;
+  /** The short caution, when the sheet words it otherwise (a test sheet prints the full caution itself). */
+  caution?: string;
 }
+
+/** The short caution of a sheet that prints the full caution itself. */
+export const CAUTION_SHORT_HERE =
+  'CAUTION: design aid only. Results do not replace inspection and testing of the installation; ' +
+  'local wiring rules and licensed practice govern. The full caution is on this sheet.';
 
 const CAPTION = 2;
 const VALUE = 2.6;
@@ -82,7 +89,7 @@ export function titleBlock(paper: Paper, info: TitleInfo): Item[] {
   // Row 3: the caution in short.
   const row3 = top + r1 + r2;
   items.push({ kind: 'rect', x: f.x, y: row3, w: f.w, h: r3, stroke: stroke(0.25) });
-  const caution = wrap(CAUTION_SHORT, 'bold', 2, f.w - 3, 2);
+  const caution = wrap(info.caution ?? CAUTION_SHORT, 'bold', 2, f.w - 3, 2);
   caution.forEach((l, i) => items.push(text(f.x + 1.5, row3 + 3 + i * 2.5, l, 2, 'bold')));
   return items;
 }

@@ -65,7 +65,7 @@ export interface TextItem {
 
 export type Item = LineItem | RectItem | PolylineItem | CircleItem | TextItem;
 
-export type SheetKind = 'diagram' | 'schedule' | 'assumptions';
+export type SheetKind = 'diagram' | 'schedule' | 'assumptions' | 'test';
 
 export interface Sheet {
   widthMm: number;
@@ -79,6 +79,12 @@ export interface Sheet {
 export interface ReportOptions {
   paper?: 'A3' | 'A4';
   orientation?: 'landscape' | 'portrait';
+  /**
+   * The test sheets, one per board, for verification on site (each circuit's test limit, the
+   * readings and their results, or blank cells for them): `'only'` the test sheets alone,
+   * `'include'` after the rest of the printout; absent, none.
+   */
+  testSheet?: 'only' | 'include';
 }
 
 /** The smallest text on paper, mm. */

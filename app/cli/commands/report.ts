@@ -17,9 +17,13 @@ const options: OptionSpec[] = [
   { name: 'paper', value: 'SIZE', choices: ['A3', 'A4', 'a3', 'a4'], summary: 'paper size, default A3' },
   { name: 'portrait', summary: 'portrait sheets (default landscape)' },
   { name: 'svg', value: 'DIR', summary: 'also write one SVG per sheet into DIR: sheet-1.svg, sheet-2.svg, ...' },
+  {
+    name: 'test-sheet',
+    summary: 'write only the test sheets, one per board: each circuit\'s test limit, its reading and result, or blank cells to fill in on site',
+  },
 ];
 
-const USAGE = 'report JOB.lwj -o OUT.pdf [--paper A4|A3] [--portrait] [--svg DIR]';
+const USAGE = 'report JOB.lwj -o OUT.pdf [--paper A4|A3] [--portrait] [--svg DIR] [--test-sheet]';
 
 /** The same file, following links, when both exist. */
 function samePath(a: string, b: string): boolean {
@@ -51,6 +55,13 @@ export const report: Command = {
     'first; and the assumptions sheet with every value used and its source. Fonts are embedded and',
     'the same job always gives the same bytes.',
     '',
+    'With --test-sheet, OUT holds the test sheets only (a document to take to site, apart from the',
+    'design printout): a sheet per board listing every circuit leaving it with its test limit (the',
+    'largest measured Zs that passes, at the temperature shown: the reading\'s, else 20 °C), the',
+    'readings with their corrected values and results where the job has them, ruled blank columns',
+    'for Zs, temperature, date, instrument and result where it has none, the method of correction',
+    'and the caution. Run the command twice for both documents.',
+    '',
     'Nothing is written when the job cannot be read; an existing OUT file is then left as it was.',
     'The output may not be the job file itself, nor any .lwj file.',
     '',
@@ -73,7 +84,12 @@ export const report: Command = {
     }
     const svgDir = typeof args.options.svg === 'string' ? args.options.svg : null;
     const paper = typeof args.options.paper === 'string' ? (args.options.paper.toUpperCase() as 'A3' | 'A4') : 'A3';
-    const reportOptions: ReportOptions = { paper, orientation: args.options.portrait === true ? 'portrait' : 'landscape' };
+    const testOnly = args.options['test-sheet'] === true;
+    const reportOptions: ReportOptions = {
+      paper,
+      orientation: args.options.portrait === true ? 'portrait' : 'landscape',
+      ...(testOnly ? { testSheet: 'only' as const } : {}),
+    };
 
     const loaded = loadJobFile(input);
     if (!loaded.ok) {
@@ -89,7 +105,8 @@ export const report: Command = {
     try {
       // Loaded here, not at start-up, so other commands do not pay for pdfkit.
       const { documentDate, sheetsToPdf } = await import('../../report/pdf.js');
-      pdf = await sheetsToPdf(sheets, { title, subject: `Fault-loop check ${job.job.reference}`.trim(), date: documentDate(job) });
+      const subject = `${testOnly ? 'Test sheets' : 'Fault-loop check'} ${job.job.reference}`.trim();
+      pdf = await sheetsToPdf(sheets, { title, subject, date: documentDate(job) });
     } catch (error) {
       err(`report: could not make the PDF: ${why(error)}. No printout written.\n`);
       return EXIT.unusable;
@@ -114,7 +131,7 @@ export const report: Command = {
     }
     out(`wrote ${wrote.join('; ')}\n`);
     const s = results.summary;
-    out(`${summaryLine(s)}\n`);
+    out(`Loop: ${summaryLine(s)}; verdict (every check): ${summaryLine(s.verdict)}\n`);
     return exitFor(results);
   },
 };
