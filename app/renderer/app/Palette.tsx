@@ -16,7 +16,11 @@ export function Palette() {
   };
   return (
     <aside className="lw-palette" aria-label="Parts">
-      <h2>Parts</h2>
+      <div className="lw-palette-head">
+        <h2>Parts</h2>
+        <button type="button" className="lw-fold" data-action="fold-palette" aria-expanded="true" aria-label="Fold the parts column"
+          title="Fold the parts and legend away" onClick={() => useUi.getState().setLayout({ paletteCollapsed: true })}>◀</button>
+      </div>
       {KINDS.map((kind) => (
         <button
           key={kind}
@@ -32,7 +36,7 @@ export function Palette() {
           {PART_LABEL[kind]}
         </button>
       ))}
-      <p className="lw-hint">Connect parts by dragging from the dot under one to the dot on top of another.</p>
+      <p className="lw-hint">Connect parts by dragging from the dot under one and releasing on the other; or select one and press Alt+L (Connect To…).</p>
       <h2>Legend</h2>
       <Legend compact />
       <button type="button" className="lw-link-button" data-action="open-legend" title="The legend in full, with the caution and the keyboard (F1)"

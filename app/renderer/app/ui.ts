@@ -24,6 +24,12 @@ export interface UiState {
 export interface Layout {
   rightWidth: number | null;
   bottomHeight: number | null;
+  /** Where the loop breakdown sits: over the sheet (default) or docked beside the schedule. */
+  breakdownDock?: 'sheet' | 'schedule';
+  /** The parts column folded to a strip. */
+  paletteCollapsed?: boolean;
+  /** The details column folded to a strip. */
+  rightCollapsed?: boolean;
 }
 
 const LAYOUT_KEY = 'loopwright.layout';
@@ -33,7 +39,14 @@ function readLayout(): Layout {
   try {
     const v = JSON.parse(globalThis.localStorage?.getItem(LAYOUT_KEY) ?? 'null') as Partial<Layout> | null;
     const ok = (n: unknown) => (typeof n === 'number' && Number.isFinite(n) && n > 0 ? n : null);
-    return v && typeof v === 'object' ? { rightWidth: ok(v.rightWidth), bottomHeight: ok(v.bottomHeight) } : none;
+    if (!v || typeof v !== 'object') return none;
+    return {
+      rightWidth: ok(v.rightWidth),
+      bottomHeight: ok(v.bottomHeight),
+      ...(v.breakdownDock === 'schedule' || v.breakdownDock === 'sheet' ? { breakdownDock: v.breakdownDock } : {}),
+      ...(v.paletteCollapsed === true ? { paletteCollapsed: true } : {}),
+      ...(v.rightCollapsed === true ? { rightCollapsed: true } : {}),
+    };
   } catch {
     return none;
   }

@@ -3,6 +3,7 @@
 import { formatProblem, parseJob, serialiseJob } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
 import { useUi } from '../app/ui.js';
+import { rememberSaved } from './autosave.js';
 
 /** Asks before replacing a job with unsaved changes; asks nothing when there are none. */
 export function confirmDiscard(action: string): boolean {
@@ -84,11 +85,13 @@ export async function saveJob(saveAs: boolean): Promise<void> {
       await w.write(text);
       await w.close();
       finish(s.job, handle.name, null);
+      rememberSaved(text, handle.name);
       return;
     }
     const name = suggestedName();
     download(text, name);
     finish(s.job, name, null);
+    rememberSaved(text, name);
   } catch (e) {
     if (e instanceof DOMException && e.name === 'AbortError') return; // the user cancelled the picker
     useEditor.getState().setMessage({ kind: 'error', text: `Could not save: ${e instanceof Error ? e.message : String(e)}` });

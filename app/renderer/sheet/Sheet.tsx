@@ -1,6 +1,6 @@
 // The sheet: React Flow drawing the job. Nodes and links come from the store; every change the
 // user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
-import { useCallback, useEffect, useMemo, useRef, type DragEvent, type MouseEvent as ReactMouseEvent } from 'react';
+import { useCallback, useEffect, useMemo, useRef, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
   Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, getViewportForBounds, useReactFlow,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
@@ -13,7 +13,7 @@ import { nodeTypes } from './nodes.js';
 import { flowList, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
 import { selectSearchable } from '../store/selectors.js';
 import { setSheetHandle } from './handle.js';
-import { newPart } from './parts.js';
+import { NODE_SIZE, newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
 import { useUi } from '../app/ui.js';
 
@@ -109,7 +109,9 @@ export function Sheet({ onContextMenu }: SheetProps) {
         const sheet = wrapper.current?.getBoundingClientRect();
         const drawn = [...nodeIds].filter((id) => flow.getInternalNode(id));
         if (!sheet || sheet.width <= 0 || drawn.length === 0) return;
-        const drawer = document.querySelector('[data-breakdown-box]')?.getBoundingClientRect() ?? null;
+        // Only a drawer over the sheet covers part of it (docked beside the schedule it covers nothing).
+        const box = document.querySelector('[data-breakdown-box]')?.getBoundingClientRect() ?? null;
+        const drawer = box && box.top < sheet.bottom && box.bottom > sheet.top && box.left < sheet.right && box.right > sheet.left ? box : null;
         const width = freeWidth(sheet, drawer);
         const view = getViewportForBounds(flow.getNodesBounds(drawn), width, sheet.height, 0.05, 1.1, 0.3);
         void flow.setViewport(view, { duration });
@@ -134,6 +136,46 @@ export function Sheet({ onContextMenu }: SheetProps) {
   useEffect(() => {
     if (focus) centre(focus.ids);
   }, [focus, centre]);
+
+  // A link reached from the keyboard (Tab to it on the sheet, Enter on it, or a schedule row) is
+  // brought into view when either end is off the sheet; a click leaves the view alone.
+  const keyboard = useRef(false);
+  useEffect(() => {
+    const key = () => { keyboard.current = true; };
+    const pointer = () => { keyboard.current = false; };
+    window.addEventListener('keydown', key, true);
+    window.addEventListener('pointerdown', pointer, true);
+    return () => {
+      window.removeEventListener('keydown', key, true);
+      window.removeEventListener('pointerdown', pointer, true);
+    };
+  }, []);
+  const ensureVisible = useCallback((id: string) => {
+    const job = useEditor.getState().job;
+    const link = job.links.find((l) => l.id === id);
+    const box = wrapper.current?.getBoundingClientRect();
+    if (!link || !box || box.width <= 0) return;
+    const { x, y, zoom } = flow.getViewport();
+    const ends = job.nodes.filter((n) => n.id === link.from || n.id === link.to);
+    const off = ends.some((n) => {
+      const at = n.at ?? { x: 0, y: 0 };
+      const size = NODE_SIZE[n.kind];
+      const left = at.x * zoom + x;
+      const top = at.y * zoom + y;
+      return left < 0 || top < 0 || left + size.width * zoom > box.width || top + size.height * zoom > box.height;
+    });
+    if (off) centre([id]);
+  }, [flow, centre]);
+  const selectedLinks = selection.links;
+  useEffect(() => {
+    if (keyboard.current && selectedLinks.length === 1) ensureVisible(selectedLinks[0]!);
+  }, [selectedLinks, ensureVisible]);
+  const onFocusCapture = useCallback((e: ReactFocusEvent) => {
+    if (!keyboard.current) return;
+    const edge = (e.target as Element).closest?.('.react-flow__edge[data-id]');
+    const id = edge?.getAttribute('data-id');
+    if (id) ensureVisible(id);
+  }, [ensureVisible]);
 
   // A job just opened (or a new one started), and the first job on mount: the whole job when it
   // fits at a readable zoom, else the supply and the top of its tree, saying how to see it all.
@@ -252,7 +294,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
   // Above this size only what is in view is drawn (every link still has its result in the schedule).
   const large = jobNodes.length > LARGE;
   return (
-    <div className="lw-sheet" ref={wrapper} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
+    <div className="lw-sheet" ref={wrapper} onFocusCapture={onFocusCapture} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
       <ReactFlow
         nodes={nodes}
         edges={edges}
