@@ -24,9 +24,10 @@ describe('report command', () => {
     expect(svgs.length).toBeGreaterThanOrEqual(3);
   });
 
-  it('exits 0 for a job where every checked circuit passes', () => {
+  it('exits 0 for a job where no verdict fails or relies on an RCD', () => {
     const job = demoJob();
-    const passing = { ...job, links: job.links.filter((l) => { const c = analyse(job).circuits.find((x) => x.link === l.id); return c?.status === 'pass' || c?.status === 'unchecked'; }) };
+    // Every check counts (results version 2): keep the links whose verdict passes or is unchecked.
+    const passing = { ...job, links: job.links.filter((l) => { const c = analyse(job).circuits.find((x) => x.link === l.id); return c?.verdict === 'pass' || c?.verdict === 'unchecked'; }) };
     // Keep the tree whole: drop nodes no remaining link feeds, except the supply.
     const fed = new Set(passing.links.map((l) => l.to));
     passing.nodes = job.nodes.filter((n) => n.kind === 'supply' || fed.has(n.id));
