@@ -77,8 +77,13 @@ function cell(key: ColumnKey, c: CellContext): { className?: string; content: Re
     case 'name':
       return {
         className: 'lwp-cell-name',
-        content: <TextField compact attr="data-cell" field="name" label={`Name of ${id}`} value={link.name} title={link.name}
-          placeholder="no name" onCommit={set('name')} />,
+        content: (
+          <span className="lwf-with-fix">
+            <TextField compact attr="data-cell" field="name" label={`Name of ${id}`} value={link.name} title={link.name}
+              placeholder="no name" onCommit={set('name')} />
+            <FixMenu linkId={id} />
+          </span>
+        ),
       };
     case 'from':
       return { className: 'lwp-cell-node', content: link.from, title: c.fromName ? `${link.from} — ${c.fromName}` : link.from };
