@@ -144,6 +144,24 @@ describe('changing the kind of a passing circuit’s device', () => {
     expect(linkOf('C1').device).toEqual({ type: 'mcb', curve: 'C', rating: 20 });
   });
 
+  it('a leg leaving a point (a fused spur) falls back to the device above it, and the form says so', () => {
+    const job = useEditor.getState().job;
+    load({
+      ...job,
+      nodes: [...job.nodes, { id: 'P9', kind: 'point', use: 'fixed-equipment', at: { x: -200, y: 480 } }],
+      links: [...job.links, { id: 'S9', from: 'P1', to: 'P9', cable: { length: 2, material: 'Cu', active: 2.5, earth: 2.5 },
+        device: { type: 'fixed', rating: 10, tripCurrent: 50 } }],
+    });
+    expect(useEditor.getState().resultById.S9!.protectedBy).toBe('S9');
+    const { container } = render(<DetailsPanel />);
+    selectLink('S9');
+    choose(field<HTMLSelectElement>(container, 'device.type'), 'curve');
+    expect(linkOf('S9').device).toBeUndefined();
+    // Checked on real data only: the C20 on C1 that the spur's fault current passes through.
+    expect(useEditor.getState().resultById.S9!.protectedBy).toBe('C1');
+    expect(container.querySelector('[data-device-missing="S9"]')!.textContent).toMatch(/checked against the device above it, on C1/);
+  });
+
   it('never shows a pass badge for the circuit straight after any kind change', () => {
     const { container } = render(<DetailsPanel />);
     selectLink('C1');

@@ -6,6 +6,7 @@
 // from the library; meanwhile the circuit is unchecked and the form says what is missing.
 
 import { deviceMark, type Curve, type Device, type DeviceType, type Link } from '../../../../engine/index.js';
+import { selectResult, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { CheckField, NumberField, SelectField, TextField } from '../fields/fields.js';
 import { CurvePoints } from './CurvePoints.js';
@@ -99,13 +100,16 @@ function DeviceFields({ id, device, set }: { id: string; device: Device; set: (f
 function DraftFields({ id, draft }: { id: string; draft: DeviceDraft }) {
   const put = (key: keyof DeviceDraft) => (v: unknown) => editDraft(id, { [key]: v } as Partial<DeviceDraft>);
   const missing = missingData(draft);
+  // A leg leaving a point is protected by the device above it while its own is being entered.
+  const protectedBy = useEditor((s) => selectResult(id)(s)?.protectedBy ?? null);
   return (
     <>
       <div className="lwd-missing" role="status" data-device-missing={id}>
         <span aria-hidden="true" className="lwd-missing-symbol">?</span>{' '}
         <strong>Device data missing:</strong> {missing.map((m) => m.words).join(', ')}.
         <span className="lwd-missing-more">
-          {' '}Until it is entered, or a device is picked below, this link has no device in the job and its circuit is unchecked
+          {' '}Until it is entered, or a device is picked below, this link has no device in the job
+          {protectedBy ? ` and its circuit is checked against the device above it, on ${protectedBy}` : ' and its circuit is unchecked'}
           {draft.replaces ? `; nothing is taken over from the ${draft.replaces} it replaces` : ''}.
         </span>
       </div>

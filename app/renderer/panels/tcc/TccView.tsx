@@ -14,7 +14,7 @@ import { decadeDomain, decadeLabel, decades, logPosition, type LogAxis } from '.
 import './tcc.css';
 
 /** Drawing units of the plot (the SVG scales to the panel's width). */
-export const PLOT = { width: 380, height: 300, left: 46, right: 10, top: 12, bottom: 40 } as const;
+export const PLOT = { width: 340, height: 290, left: 44, right: 16, top: 12, bottom: 40 } as const;
 
 export interface TccModel {
   link: string;
@@ -138,7 +138,9 @@ export function TccView({ linkId }: { linkId: string }) {
           <span aria-hidden="true">{flag.symbol}</span> {flag.word}
         </span>
       </p>
-      <p className="lwt-flag-detail">{flagText(m)} (a flag for the designer, not a verdict).</p>
+      <p className="lwt-flag-detail">
+        {flagText(m)}{m.flag.kind === 'unknown' ? '.' : ' (a flag for the designer, not a verdict).'}
+      </p>
       <svg className="lwt-plot" viewBox={`0 0 ${PLOT.width} ${PLOT.height}`} role="img"
         aria-label={`Time against current, log–log: ${m.down.mark} on ${m.down.link}${m.up ? `, upstream ${m.up.mark} on ${m.up.link}` : ''}`}
         data-axis-current={`${x.lo}-${x.hi}`}>
@@ -151,18 +153,18 @@ export function TccView({ linkId }: { linkId: string }) {
         {decades(x.lo, x.hi).map((v) => (
           <g key={`x${v}`} data-tick-current={v}>
             <line x1={X(v)} x2={X(v)} y1={top} y2={bottom} className="lwt-grid" />
-            <text x={X(v)} y={bottom + 11} textAnchor="middle" className="lwt-tick">{decadeLabel(v)}</text>
+            <text x={X(v)} y={bottom + 13} textAnchor="middle" className="lwt-tick">{decadeLabel(v)}</text>
           </g>
         ))}
         {decades(TIME_AXIS.lo, TIME_AXIS.hi).map((v) => (
           <g key={`y${v}`} data-tick-time={v}>
             <line x1={x.from} x2={x.to} y1={Y(v)} y2={Y(v)} className="lwt-grid" />
-            <text x={PLOT.left - 4} y={Y(v) + 3.5} textAnchor="end" className="lwt-tick">{decadeLabel(v)}</text>
+            <text x={PLOT.left - 4} y={Y(v) + 4} textAnchor="end" className="lwt-tick">{decadeLabel(v)}</text>
           </g>
         ))}
         <text x={(x.from + x.to) / 2} y={PLOT.height - 6} textAnchor="middle" className="lwt-axis">current (A)</text>
-        <text x={11} y={(top + bottom) / 2} textAnchor="middle" className="lwt-axis"
-          transform={`rotate(-90 11 ${(top + bottom) / 2})`}>time (s)</text>
+        <text x={12} y={(top + bottom) / 2} textAnchor="middle" className="lwt-axis"
+          transform={`rotate(-90 12 ${(top + bottom) / 2})`}>time (s)</text>
         <g clipPath={`url(#${clipId})`}>
           {m.up ? <path d={path(m.up.c, x)} className="lwt-up" data-tcc-curve="upstream" /> : null}
           <path d={path(m.down.c, x)} className="lwt-down" data-tcc-curve="device" />
@@ -185,9 +187,9 @@ export function TccView({ linkId }: { linkId: string }) {
           ) : null}
         </g>
         {/* Short names at the marks, staggered so that close marks stay readable. */}
-        {r.faultCurrent !== null ? <text x={X(r.faultCurrent) + 2} y={top + 9} className="lwt-label lwt-label-if">If</text> : null}
-        {r.tripCurrent !== null ? <text x={X(r.tripCurrent) + 2} y={top + 19} className="lwt-label">Ia</text> : null}
-        {m.imax !== null ? <text x={X(m.imax) + 2} y={top + 29} className="lwt-label">Imax</text> : null}
+        {r.faultCurrent !== null ? <MarkLabel x={X(r.faultCurrent)} y={top + 11} edge={x.to} text="If" /> : null}
+        {r.tripCurrent !== null ? <MarkLabel x={X(r.tripCurrent)} y={top + 23} edge={x.to} text="Ia" /> : null}
+        {m.imax !== null ? <MarkLabel x={X(m.imax)} y={top + 35} edge={x.to} text="Imax" /> : null}
         {r.requiredTime !== null ? <text x={x.from + 3} y={Y(r.requiredTime) - 3} className="lwt-label lwt-label-treq">t req</text> : null}
       </svg>
       <table className="lwt-key">
@@ -213,6 +215,14 @@ export function TccView({ linkId }: { linkId: string }) {
       ) : null}
       <p className="lwt-caution">{CAUTION}</p>
     </section>
+  );
+}
+
+/** A mark's short name beside its line, on the left of it near the right edge. */
+function MarkLabel({ x, y, edge, text }: { x: number; y: number; edge: number; text: string }) {
+  const left = x > edge - 8 * text.length;
+  return (
+    <text x={left ? x - 2 : x + 2} y={y} textAnchor={left ? 'end' : 'start'} className="lwt-label">{text}</text>
   );
 }
 
