@@ -162,6 +162,18 @@ describe('changing the kind of a passing circuit’s device', () => {
     expect(container.querySelector('[data-device-missing="S9"]')!.textContent).toMatch(/checked against the device above it, on C1/);
   });
 
+  it('a draft follows its link through a rename and goes with a new document', () => {
+    const { container } = render(<DetailsPanel />);
+    selectLink('C1');
+    choose(field<HTMLSelectElement>(container, 'device.type'), 'fixed');
+    typeAndEnter(field(container, 'device.rating'), '25');
+    typeAndEnter(field(container, 'id'), 'C1A');
+    expect(useDrafts.getState().drafts.C1A?.rating).toBe(25);
+    expect(field(container, 'device.rating').value).toBe('25');
+    act(() => load(sampleJob()));
+    expect(useDrafts.getState().drafts).toEqual({});
+  });
+
   it('never shows a pass badge for the circuit straight after any kind change', () => {
     const { container } = render(<DetailsPanel />);
     selectLink('C1');

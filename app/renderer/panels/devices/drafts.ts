@@ -9,6 +9,7 @@
 import { create } from 'zustand';
 import type { Curve, Device, DeviceType } from '../../../../engine/index.js';
 import { useEditor } from '../../store/index.js';
+import { idFollower } from '../../store/renames.js';
 import { editLink } from '../actions.js';
 import type { Outcome } from '../fields/fields.js';
 
@@ -178,7 +179,7 @@ export function putDevice(linkId: string, device: Device, label: string): Outcom
   return outcome;
 }
 
-// A new document drops every draft; a link that is gone drops its own.
+// A new document drops every draft; a renamed link keeps its own; a link that is gone drops it.
 useEditor.subscribe((s, prev) => {
   if (s.documentSeq !== prev.documentSeq) {
     if (Object.keys(useDrafts.getState().drafts).length > 0) clearDrafts();
@@ -188,8 +189,10 @@ useEditor.subscribe((s, prev) => {
   const drafts = useDrafts.getState().drafts;
   const ids = Object.keys(drafts);
   if (ids.length === 0) return;
-  const present = new Set(s.job.links.map((l) => l.id));
-  if (ids.some((id) => !present.has(id))) {
-    useDrafts.setState({ drafts: Object.fromEntries(Object.entries(drafts).filter(([id]) => present.has(id))) });
-  }
+  const follow = idFollower(prev.job, s.job);
+  const moved = ids.map((id) => [id, follow(id)] as const);
+  if (moved.every(([id, now]) => id === now)) return;
+  const next: Record<string, DeviceDraft> = {};
+  for (const [id, now] of moved) if (now !== null) next[now] = drafts[id]!;
+  useDrafts.setState({ drafts: next });
 });
