@@ -162,6 +162,12 @@ describe('planning a fix', () => {
     expect(rcd.edit).toEqual({ op: 'update-link', id: 'C2', patch: { rcd: { sensitivity: 0.03 } } });
     expect(fixMessage('C2b', { kind: 'rcd', sensitivity: 0.03 }, rcd, { ...far, status: 'rcd' } as CircuitResult))
       .toBe('Applied a fix to C2b: add a 30 mA RCD on C2 (which protects C2b). C2b now relies on the RCD to disconnect an earth fault (⚠ RCD-reliant): it is not a pass.');
+    // A fix that clears the loop while another check still fails says which.
+    const length = planFix({ links }, { link: 'C2', protectedBy: 'C2' } as CircuitResult, { kind: 'length', maxLength: 50.06 });
+    if ('error' in length) throw new Error(length.error);
+    const still = { link: 'C2', status: 'pass', verdict: 'fail', voltageStatus: 'fail', capacityStatus: 'pass', breakingStatus: 'unchecked', withstandStatus: 'unchecked', measured: null } as unknown as CircuitResult;
+    expect(fixMessage('C2', { kind: 'length', maxLength: 50.06 }, length, still))
+      .toBe('Applied a fix to C2: set the length of C2 to 50.0 m (its maximum 50.06 m rounded down to 0.1 m, so it still passes). C2: loop impedance now ✓ pass; still ✗ FAIL on voltage drop.');
     // An unprotected circuit has no device to change.
     expect(planFix({ links }, { link: 'C2b', protectedBy: null } as CircuitResult, { kind: 'device', curve: 'B', rating: 16 }))
       .toEqual({ error: 'C2b has no protecting device to change' });

@@ -5,6 +5,10 @@ import type { CircuitResult, Fix, Job, Link, Status } from '../../../../engine/i
 import { useEditor } from '../../store/index.js';
 import type { Edit } from '../../store/edits.js';
 import { STATUS_LOOK } from '../format.js';
+import { CHECKS, failingChecks } from '../../sheet/labels.js';
+
+/** The loop check's word in failingChecks (the fix message names the other checks). */
+const LOOP_WORD: string = CHECKS.find((c) => c.key === 'loop')!.word;
 
 /**
  * A length rounded down to 0.1 m, so a fix that says "at most maxLength" still passes once
@@ -104,8 +108,9 @@ export function fixMessage(linkId: string, fix: Fix, plan: PlannedFix, after: Ci
     return `${done} ${linkId} now relies on the RCD to disconnect an earth fault (${statusText(after?.status ?? 'rcd')}): it is not a pass.`;
   }
   if (!after) return done;
-  const other = after.verdict === 'fail' && after.status !== 'fail' ? ' Another check of it still fails (see its results).' : '';
-  return `${done} ${linkId} is now ${statusText(after.status)}.${other}`;
+  const others = failingChecks(after).filter((c) => c !== LOOP_WORD);
+  if (after.verdict === after.status || others.length === 0) return `${done} ${linkId} is now ${statusText(after.status)}.`;
+  return `${done} ${linkId}: loop impedance now ${statusText(after.status)}; still ${statusText('fail')} on ${others.join(', ')}.`;
 }
 
 /** Applies one fix of a circuit as one undoable edit and says in the status bar what it did. */
