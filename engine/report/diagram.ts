@@ -91,8 +91,9 @@ export function linkLabel(ctx: Ctx, link: Link, x: number, y: number): Item[] {
   items.push(text(lx, next(), truncate(`${fmtCable(link.cable)} · ${fmtMetre(link.cable.length)} m`, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT));
   if (c !== undefined) {
     if (load !== null) {
+      // Over its limit: the '>' says so, in the failure colour; the verdict line names the check.
       const color = c.voltageStatus === 'fail' ? STATUS_COLOR.fail : undefined;
-      items.push(text(lx, next(), truncate(load, c.voltageStatus === 'fail' ? 'bold' : 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT, c.voltageStatus === 'fail' ? 'bold' : 'regular', 'start', color));
+      items.push(text(lx, next(), truncate(load, 'regular', LABEL_TEXT, LABEL_W), LABEL_TEXT, 'regular', 'start', color));
     }
     const loop = judgedLoop(c);
     let loopText: string;
