@@ -9,7 +9,7 @@ import { useEditor } from '../store/editor.js';
 import { selectLink, selectNode, selectResult } from '../store/selectors.js';
 import { NODE_SIZE } from './parts.js';
 import { BUS_DROP, LABEL_HEIGHT, linkGeometry, LABEL_WIDTH } from './geometry.js';
-import { fitLabel, labelLines, pickLines, shownVerdict, LABEL_LINE } from './labels.js';
+import { fitLabel, fitVerdict, labelLines, pickLines, shownVerdict, LABEL_LINE } from './labels.js';
 
 /** The zoom in steps of 0.05, so a label re-renders only when its fit may change. */
 const zoomStep = (s: ReactFlowState) => Math.max(0.05, Math.round(s.transform[2] * 20) / 20);
@@ -43,8 +43,9 @@ function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected
   const all = labelLines(link, result);
   const fit = fitLabel(all.length, labelRoom(g.labelPlace, sourceY, targetY), zoom);
   const lines = pickLines(all, fit.count, result);
-  // Zoomed out the device line may be left out: the id then leads the verdict line.
+  // Zoomed out the device line may be left out: the id then leads the verdict line when it fits.
   const idOnDevice = lines.some((l) => l.key === 'device');
+  const verdictFit = fitVerdict(id, result, fit.font, LABEL_WIDTH - 16, idOnDevice);
   const name = link.name ? `${link.name}: ` : '';
   const title = `${id} ${name}${all.map((l) => l.text).join('\n')}${result?.notes.length ? `\n${result.notes.join(' ')}` : ''}`;
   return (
@@ -65,7 +66,10 @@ function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected
             l.key === 'device' ? (
               <div key={l.key} className="lw-label-device" data-label-line="device"><b>{id}</b> {l.text}</div>
             ) : l.key === 'verdict' ? (
-              <div key={l.key} className="lw-label-status" data-label-line="verdict">{idOnDevice ? null : <b>{id} </b>}{l.text}</div>
+              <div key={l.key} className="lw-label-status" data-label-line="verdict"
+                style={verdictFit.font < fit.font ? { fontSize: `${verdictFit.font.toFixed(2)}px` } : undefined}>
+                {verdictFit.withId ? <b>{id} </b> : null}{verdictFit.text}
+              </div>
             ) : (
               <div key={l.key} className={`lw-label-${l.key}`} data-label-line={l.key}>{l.text}</div>
             ),

@@ -78,12 +78,12 @@ export const USE_LABEL: Record<string, string> = {
 
 /** The checks that make up a verdict, in the order they are named. */
 export const CHECKS = [
-  { key: 'loop', word: 'loop impedance' },
-  { key: 'voltage', word: 'voltage drop' },
-  { key: 'capacity', word: 'cable capacity' },
-  { key: 'breaking', word: 'breaking capacity' },
-  { key: 'withstand', word: 'earth withstand' },
-  { key: 'measured', word: 'measured reading' },
+  { key: 'loop', word: 'loop impedance', short: 'loop' },
+  { key: 'voltage', word: 'voltage drop', short: 'drop' },
+  { key: 'capacity', word: 'cable capacity', short: 'capacity' },
+  { key: 'breaking', word: 'breaking capacity', short: 'breaking' },
+  { key: 'withstand', word: 'earth withstand', short: 'earth' },
+  { key: 'measured', word: 'measured reading', short: 'reading' },
 ] as const;
 export type CheckKey = (typeof CHECKS)[number]['key'];
 
@@ -100,9 +100,9 @@ export function checkStatuses(r: CircuitResult): Record<CheckKey, Status> {
 }
 
 /** The words of the checks that fail, in the order of CHECKS (empty when none fails). */
-export function failingChecks(r: CircuitResult): string[] {
+export function failingChecks(r: CircuitResult, short = false): string[] {
   const s = checkStatuses(r);
-  return CHECKS.filter((c) => s[c.key] === 'fail').map((c) => c.word);
+  return CHECKS.filter((c) => s[c.key] === 'fail').map((c) => (short ? c.short : c.word));
 }
 
 const SEVERITY: Record<Status, number> = { fail: 3, rcd: 2, pass: 1, unchecked: 0 };
@@ -121,12 +121,13 @@ export function shownVerdict(r: CircuitResult | undefined): Status {
  * The verdict line: symbol and word, and for a failure which checks fail. A circuit whose design
  * passes but whose measured reading fails says so.
  */
-export function verdictText(r: CircuitResult | undefined): string {
+export function verdictText(r: CircuitResult | undefined, short = false): string {
   const shown = shownVerdict(r);
   const head = statusText(shown);
   if (!r || shown !== 'fail') return head;
-  const failing = failingChecks(r);
-  if (failing.length === 1 && failing[0] === 'measured reading') return `${head}: design passes, reading fails`;
+  const failing = failingChecks(r, short);
+  const s = checkStatuses(r);
+  if (s.measured === 'fail' && failing.length === 1) return short ? `${head}: reading (design passes)` : `${head}: design passes, reading fails`;
   return failing.length > 0 ? `${head}: ${failing.join(', ')}` : head;
 }
 
@@ -180,15 +181,15 @@ export interface LabelLine {
   text: string;
 }
 
-/** Every line a link label can show, in drawing order (empty lines left out). */
-export function labelLines(link: Link, r: CircuitResult | undefined): LabelLine[] {
+/** Every line a link label can show, in drawing order (empty lines left out); `short` words for a zoomed-out view. */
+export function labelLines(link: Link, r: CircuitResult | undefined, short = false): LabelLine[] {
   const lines: LabelLine[] = [
     { key: 'device', text: deviceLine(link, r) },
     { key: 'cable', text: cableLine(link) },
     { key: 'result', text: resultLine(r) },
     { key: 'load', text: loadLine(r) },
     { key: 'measured', text: measuredLine(r) },
-    { key: 'verdict', text: verdictText(r) },
+    { key: 'verdict', text: verdictText(r, short) },
   ];
   return lines.filter((l) => l.text !== '');
 }
@@ -215,7 +216,7 @@ export function pickLines(lines: readonly LabelLine[], count: number, r: Circuit
 
 /** The smallest type a label is drawn in, in screen pixels, whatever the zoom. */
 export const MIN_LABEL_PX = 9;
-/** The label's type at zoom 1 and above (flow px); it never grows past this. */
+/** The label's type at zoom 1 (flow px = screen px); zoomed out, the most it takes on screen. */
 export const LABEL_FONT = 11;
 export const LABEL_LINE = 1.3;
 /** Border and padding above and below the lines (flow px). */
@@ -229,16 +230,54 @@ export interface LabelFit {
 }
 
 /**
- * How many of `wanted` lines fit in `room` flow px at `zoom`, and at what size: as many as fit with
- * type no smaller than MIN_LABEL_PX on screen and no larger than LABEL_FONT; when zoomed out, fewer
- * lines rather than smaller type. Never taller than the room (no label runs under a part).
+ * How many of `wanted` lines fit in `room` flow px at `zoom`, and at what size. The type is never
+ * smaller than MIN_LABEL_PX on screen; zoomed out it is at most LABEL_FONT on screen (so larger in
+ * flow px), zoomed in at most LABEL_FONT flow px. Zoomed out: fewer lines rather than smaller type.
+ * Never taller than the room (no label runs under a part); when not even one line fits at a
+ * readable size, one line as large as the room allows.
  */
 export function fitLabel(wanted: number, room: number, zoom: number): LabelFit {
   const z = zoom > 0 ? zoom : 1;
   const smallest = MIN_LABEL_PX / z;
-  for (let n = wanted; n >= 1; n--) {
-    const font = Math.min(LABEL_FONT, (room - LABEL_PAD) / (n * LABEL_LINE));
+  const largest = Math.max(LABEL_FONT, LABEL_FONT / z);
+  for (let n = Math.max(1, wanted); n >= 1; n--) {
+    const font = Math.min(largest, (room - LABEL_PAD) / (n * LABEL_LINE));
     if (font >= smallest - 1e-9) return { count: n, font };
   }
-  return { count: 1, font: Math.max(1, Math.min(LABEL_FONT, (room - LABEL_PAD) / LABEL_LINE)) };
+  return { count: 1, font: Math.max(1, Math.min(largest, (room - LABEL_PAD) / LABEL_LINE)) };
+}
+
+/** Average width of a label character, as a share of the type size (system sans, bold; common practice). */
+export const CHAR_WIDTH = 0.68;
+
+export interface VerdictFit {
+  /** Whether the link id leads the line. */
+  withId: boolean;
+  text: string;
+  /** Type size (flow px), reduced only when not even the status word fits the width. */
+  font: number;
+}
+
+/**
+ * The verdict line for a label `width` flow px wide at type `font`: the status symbol and word
+ * always whole; then, as room allows, which checks fail and the link id (left out first when
+ * the device line, which carries the id, is drawn).
+ */
+export function fitVerdict(id: string, r: CircuitResult | undefined, font: number, width: number, idElsewhere: boolean): VerdictFit {
+  const chars = width / (CHAR_WIDTH * font);
+  const long = verdictText(r);
+  const short = verdictText(r, true);
+  const head = statusText(shownVerdict(r));
+  const tries: Array<{ withId: boolean; text: string }> = idElsewhere
+    ? [{ withId: false, text: long }, { withId: false, text: short }, { withId: false, text: head }]
+    : [
+      { withId: true, text: long }, { withId: true, text: short }, { withId: false, text: short },
+      { withId: true, text: head }, { withId: false, text: head },
+    ];
+  for (const t of tries) {
+    const length = (t.withId ? id.length + 1 : 0) + t.text.length;
+    if (length <= chars) return { ...t, font };
+  }
+  // Not even the status word fits at this size: smaller type rather than a cut word.
+  return { withId: false, text: head, font: Math.min(font, width / (CHAR_WIDTH * head.length)) };
 }

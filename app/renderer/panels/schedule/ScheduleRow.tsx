@@ -5,7 +5,6 @@ import { memo, type ReactNode } from 'react';
 import { deviceMark, type CircuitResult, type Device, type Link, type Status } from '../../../../engine/index.js';
 import { selectLink, selectNode, selectResult, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
-import { StatusBadge } from '../details/CircuitResults.js';
 import { FixMenu } from '../fixes/FixButtons.js';
 import { NumberField, TextField } from '../fields/fields.js';
 import { ROLE_SHORT, ROLE_LONG, STATUS_LOOK, failingChecks, num, ohms, ohmsValue, percentValue, shownVerdict } from '../format.js';
@@ -148,7 +147,7 @@ function cell(key: ColumnKey, c: CellContext): { className?: string; content: Re
     case 'ratio':
       return { className: 'lwp-num lwp-cell-ratio lwp-sticky-ratio', content: percentValue(r?.ratio) };
     case 'status':
-      return { className: 'lwp-sticky-status', content: r ? <StatusBadge status={r.status} /> : '—' };
+      return { className: 'lwp-sticky-status', content: r ? <CheckCell status={r.status} check="loop impedance" /> : '—' };
     case 'phases':
       return { className: 'lwp-num', content: r ? String(r.phases) : '—', title: link.phases === undefined ? 'derived from the network' : 'stated' };
     case 'ib':
@@ -181,6 +180,18 @@ function cell(key: ColumnKey, c: CellContext): { className?: string; content: Re
       };
     case 'izStatus':
       return { content: r ? <CheckCell status={r.capacityStatus} check="capacity Ib ≤ In ≤ Iz" /> : '—' };
+    case 'rating':
+      return {
+        className: 'lwp-cell-amps',
+        content: link.device ? (
+          <NumberField compact attr="data-cell" field="device.rating" label={`Device rating of ${id}`} unit="A" above={0}
+            value={link.device.rating} onCommit={set('device.rating')} />
+        ) : (
+          <span className="lwp-muted" title={r?.protectedBy && r.protectedBy !== id ? `Protected by the device on ${r.protectedBy}` : 'No protective device'}>
+            {r?.protectedBy && r.protectedBy !== id ? `via ${r.protectedBy}` : 'none'}
+          </span>
+        ),
+      };
     case 'breaking':
       return { className: 'lwp-num', content: link.device?.breaking !== undefined ? num(link.device.breaking, 1) : '—' };
     case 'fault':
@@ -210,7 +221,7 @@ function cell(key: ColumnKey, c: CellContext): { className?: string; content: Re
       const failing = r ? failingChecks(r) : [];
       return {
         className: 'lwp-sticky-verdict',
-        content: r ? <span data-verdict-cell={v} title={failing.length ? `fails: ${failing.join(', ')}` : undefined}><StatusBadge status={v} /></span> : '—',
+        content: r ? <span data-verdict-cell={v}><CheckCell status={v} check="verdict" why={failing.length ? `fails: ${failing.join(', ')}` : undefined} /></span> : '—',
       };
     }
   }

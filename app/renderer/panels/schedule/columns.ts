@@ -14,7 +14,7 @@ export type ColumnKey =
   | 'id' | 'name' | 'from' | 'to' | 'role' | 'cable' | 'length' | 'device' | 'rcd'
   | 'loop' | 'limit' | 'ia' | 'treq' | 'ratio' | 'maxLength' | 'status'
   | 'phases' | 'ib' | 'pf' | 'vdOwn' | 'vdTotal' | 'vdLimit' | 'vStatus' | 'iz' | 'izStatus'
-  | 'breaking' | 'fault' | 'bStatus' | 'earthMin' | 'wStatus' | 'testLimit' | 'measured' | 'mStatus' | 'verdict';
+  | 'rating' | 'breaking' | 'fault' | 'bStatus' | 'earthMin' | 'wStatus' | 'testLimit' | 'measured' | 'mStatus' | 'verdict';
 
 export interface Column {
   key: ColumnKey;
@@ -62,18 +62,19 @@ export const COLUMNS: readonly Column[] = [
   { key: 'phases', label: 'Ph.', title: 'Phases, stated or derived (1 or 3)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.phases ?? null },
   { key: 'ib', label: 'Ib', unit: 'A', title: 'Design current Ib (A): the override typed here, else from the loads below', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.designCurrent ?? null },
   { key: 'pf', label: 'cos φ', title: 'Power factor used for the voltage drop', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.powerFactor ?? null },
-  { key: 'vdOwn', label: 'Vd own', unit: '%', title: 'Voltage drop in this link (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDrop ?? null },
-  { key: 'vdTotal', label: 'Vd total', unit: '%', title: 'Voltage drop from the supply to the far end (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDropTotal ?? null },
-  { key: 'vdLimit', label: 'Vd limit', unit: '%', title: 'Voltage-drop limit at the point (% of U0); none for a link to a board', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.voltageDropLimit ?? null },
+  { key: 'vdOwn', label: 'Vd', unit: '% own', title: 'Voltage drop in this link (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDrop ?? null },
+  { key: 'vdTotal', label: 'Vd', unit: '% total', title: 'Voltage drop from the supply to the far end (% of U0)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.voltageDropTotal ?? null },
+  { key: 'vdLimit', label: 'Vd', unit: '% limit', title: 'Voltage-drop limit at the point (% of U0); none for a link to a board', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.voltageDropLimit ?? null },
   { key: 'vStatus', label: 'Drop', title: 'The voltage-drop check: total drop against the limit', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.voltageStatus] : null) },
   { key: 'iz', label: 'Iz', unit: 'A', title: 'Cable capacity Iz (A): the value typed here, else the table times derating', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.capacity ?? null },
-  { key: 'izStatus', label: 'Capacity', title: 'The capacity check Ib ≤ In ≤ Iz', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.capacityStatus] : null) },
+  { key: 'izStatus', label: 'Cap.', title: 'The capacity check Ib ≤ In ≤ Iz', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.capacityStatus] : null) },
+  { key: 'rating', label: 'In', unit: 'A', title: 'Rated current In of the link\u2019s own device (A)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.rating ?? null },
   { key: 'breaking', label: 'Icn', unit: 'kA', title: 'Breaking capacity of the device (kA)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.breaking ?? null },
-  { key: 'fault', label: 'Fault lvl', unit: 'kA', title: 'Maximum prospective fault current at the link\u2019s origin (kA)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.faultLevel ?? null },
-  { key: 'bStatus', label: 'Breaking', title: 'The breaking-capacity check: the device breaks the fault level', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.breakingStatus] : null) },
+  { key: 'fault', label: 'Imax', unit: 'kA', title: 'Maximum prospective fault current at the link\u2019s origin (kA)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.faultLevel ?? null },
+  { key: 'bStatus', label: 'Break', title: 'The breaking-capacity check: the device breaks the fault level', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.breakingStatus] : null) },
   { key: 'earthMin', label: 'PE min', unit: 'mm²', title: 'Least protective-conductor area for the fault energy (adiabatic), mm²', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.earthMinArea ?? null },
-  { key: 'wStatus', label: 'Withstand', title: 'The protective conductor\u2019s withstand check', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.withstandStatus] : null) },
-  { key: 'testLimit', label: 'Test limit', unit: 'Ω', title: 'Largest measured Zs that passes, at the measured temperature (else 20 °C), Ω', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.testLimit ?? null },
+  { key: 'wStatus', label: 'PE ok', title: 'The protective conductor\u2019s withstand check', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[r(x)!.withstandStatus] : null) },
+  { key: 'testLimit', label: 'Test lim.', unit: 'Ω', title: 'Largest measured Zs that passes, at the measured temperature (else 20 °C), Ω', group: 'result', firstDirection: 'asc', sortValue: (x) => r(x)?.testLimit ?? null },
   { key: 'measured', label: 'Measured', unit: 'Ω', title: 'Measured Zs, with the corrected value below (Ω)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.measured?.zs ?? null },
   { key: 'mStatus', label: 'Reading', title: 'The measured reading against its corrected limit', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x)?.measured ? STATUS_RANK[r(x)!.measured!.status] : null) },
   { key: 'verdict', label: 'Verdict', title: 'fail when any check fails; else relies on RCD; else pass; else unchecked', group: 'result', firstDirection: 'asc', sortValue: (x) => (r(x) ? STATUS_RANK[shownVerdict(r(x))] : null) },
@@ -94,10 +95,10 @@ export const COLUMN_SET_TITLE: Record<ColumnSet, string> = {
  * question and fits a 1280 px wide window without scrolling sideways; the verdict is in every set.
  */
 export const SET_COLUMNS: Record<ColumnSet, readonly ColumnKey[]> = {
-  loop: ['id', 'name', 'from', 'to', 'role', 'cable', 'length', 'device', 'rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength', 'ratio', 'status', 'verdict'],
-  loads: ['id', 'name', 'to', 'phases', 'cable', 'length', 'device', 'ib', 'pf', 'vdOwn', 'vdTotal', 'vdLimit', 'vStatus', 'iz', 'izStatus', 'verdict'],
-  faults: ['id', 'name', 'to', 'role', 'cable', 'length', 'device', 'breaking', 'fault', 'bStatus', 'earthMin', 'wStatus', 'verdict'],
-  testing: ['id', 'name', 'to', 'cable', 'length', 'device', 'rcd', 'testLimit', 'measured', 'mStatus', 'ratio', 'status', 'verdict'],
+  loop: ['id', 'name', 'cable', 'length', 'device', 'rcd', 'loop', 'limit', 'ratio', 'status', 'verdict'],
+  loads: ['id', 'name', 'cable', 'rating', 'ib', 'vdTotal', 'vdLimit', 'vStatus', 'iz', 'izStatus', 'verdict'],
+  faults: ['id', 'name', 'to', 'cable', 'device', 'breaking', 'fault', 'bStatus', 'earthMin', 'wStatus', 'verdict'],
+  testing: ['id', 'name', 'to', 'device', 'testLimit', 'measured', 'mStatus', 'ratio', 'status', 'verdict'],
   all: [
     'id', 'name', 'from', 'to', 'role', 'phases', 'cable', 'length', 'device', 'rcd', 'loop', 'limit', 'ia', 'treq', 'maxLength',
     'ib', 'pf', 'vdOwn', 'vdTotal', 'vdLimit', 'vStatus', 'iz', 'izStatus', 'breaking', 'fault', 'bStatus', 'earthMin', 'wStatus',
@@ -108,7 +109,7 @@ export const SET_COLUMNS: Record<ColumnSet, readonly ColumnKey[]> = {
 /** Columns that stay in view at the right edge while a wide set scrolls sideways, right-most last. */
 export const PINNED: readonly ColumnKey[] = ['ratio', 'status', 'verdict'];
 /** Their widths (px), from which each pinned column's offset from the right edge follows. */
-export const PINNED_WIDTH: Partial<Record<ColumnKey, number>> = { ratio: 62, status: 112, verdict: 112 };
+export const PINNED_WIDTH: Partial<Record<ColumnKey, number>> = { ratio: 54, status: 96, verdict: 96 };
 
 /** The right offset (px) of each pinned column of a set that ends with pinned columns. */
 export function pinnedOffsets(keys: readonly ColumnKey[]): Partial<Record<ColumnKey, number>> {
