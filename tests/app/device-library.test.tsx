@@ -11,7 +11,7 @@ import {
   STORAGE_KEY, deviceForJob, deviceProblems, readStored, reloadUserDevices, saveUserDevice, useUserDevices,
 } from '../../app/renderer/panels/devices/userDevices.js';
 import { useDrafts } from '../../app/renderer/panels/devices/drafts.js';
-import { choose, field } from './panels/dom.js';
+import { choose, field, typeAndEnter } from './panels/dom.js';
 import { linkOf, load, sampleJob } from './panels/fixture.js';
 
 describe('built-in library', () => {
@@ -119,6 +119,17 @@ describe("the designer's own devices", () => {
     reloadUserDevices();
     const saved = JSON.parse(serialiseJob(useEditor.getState().job)) as { links: Array<{ id: string; device?: unknown }> };
     expect(saved.links.find((l) => l.id === 'C1')!.device).toEqual({ ...curve, label: 'Maker X 40 A' });
+  });
+
+  it('names the source of a device while it is exactly a library entry, and stops once it is edited', () => {
+    const { container } = render(<DetailsPanel />);
+    act(() => useEditor.getState().select({ nodes: [], links: ['C2'] }));
+    // C2 is a C20 breaker: exactly the library's entry.
+    expect(container.querySelector('[data-device-source]')!.textContent).toMatch(/^C20 breaker: IEC 60898-1 curve C/);
+    choose(field<HTMLSelectElement>(container, 'device.library'), 'lib:gG-25');
+    expect(container.querySelector('[data-device-source]')!.textContent).toMatch(/^25 A gG fuse: IEC 60269-1/);
+    typeAndEnter(field(container, 'device.rating'), '24');
+    expect(container.querySelector('[data-device-source]')).toBeNull();
   });
 
   it('the device editor saves the link’s device under a name', () => {

@@ -58,7 +58,7 @@ export function DeviceEditor({ link }: { link: Link }) {
       ) : (
         <p className="lwp-hint">Without a device this link still adds impedance, and its own check is unchecked.</p>
       )}
-      <DevicePicker linkId={id} kind={kind} />
+      <DevicePicker linkId={id} kind={kind} device={device} />
       {device ? <SaveMyDevice device={device} /> : null}
     </fieldset>
   );

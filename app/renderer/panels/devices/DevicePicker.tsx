@@ -6,7 +6,7 @@ import { useId, useState } from 'react';
 import type { Device } from '../../../../engine/index.js';
 import { LIBRARY, deviceFromEntry, libraryEntry, type LibraryEntry } from './library.js';
 import { putDevice } from './drafts.js';
-import { deviceForJob, saveUserDevice, useUserDevices, removeUserDevice } from './userDevices.js';
+import { deviceForJob, saveUserDevice, useUserDevices, removeUserDevice, type UserDevice } from './userDevices.js';
 
 const MINE = 'mine:';
 const BUILT_IN = 'lib:';
@@ -23,11 +23,29 @@ function ordered(kind: string): LibraryEntry[] {
   return [...LIBRARY.filter(fits), ...LIBRARY.filter((e) => !fits(e))];
 }
 
-export function DevicePicker({ linkId, kind }: { linkId: string; kind: string }) {
+/** Text of a value with object keys sorted, for comparing devices field by field. */
+function canonical(v: unknown): string {
+  return JSON.stringify(v, (_k, x: unknown) =>
+    x && typeof x === 'object' && !Array.isArray(x)
+      ? Object.fromEntries(Object.entries(x as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : 1)))
+      : x);
+}
+
+/** Where a link's device comes from, when it is exactly a library entry or one of the designer's own. */
+export function sourceOf(device: Device | undefined, mine: readonly UserDevice[]): { name: string; source: string } | null {
+  if (!device) return null;
+  const text = canonical(device);
+  const entry = LIBRARY.find((e) => canonical(e.device) === text);
+  if (entry) return { name: entry.name, source: entry.source };
+  const own = mine.find((u) => canonical(deviceForJob(u)) === text);
+  return own ? { name: own.name, source: 'your own device, copied into this job' } : null;
+}
+
+export function DevicePicker({ linkId, kind, device }: { linkId: string; kind: string; device: Device | undefined }) {
   const selectId = useId();
   const mine = useUserDevices((s) => s.devices);
   const problems = useUserDevices((s) => s.problems);
-  const [picked, setPicked] = useState<{ name: string; source: string } | null>(null);
+  const picked = sourceOf(device, mine);
   const [error, setError] = useState<string | null>(null);
 
   const pick = (value: string) => {
@@ -37,13 +55,11 @@ export function DevicePicker({ linkId, kind }: { linkId: string; kind: string })
       if (!entry) return;
       const outcome = putDevice(linkId, deviceFromEntry(entry), `use ${entry.name} on ${linkId}`);
       setError(outcome.ok ? null : outcome.reason);
-      setPicked(outcome.ok ? { name: entry.name, source: entry.source } : null);
     } else if (value.startsWith(MINE)) {
       const u = mine[Number(value.slice(MINE.length))];
       if (!u) return;
       const outcome = putDevice(linkId, deviceForJob(u), `use ${u.name} on ${linkId}`);
       setError(outcome.ok ? null : outcome.reason);
-      setPicked(outcome.ok ? { name: u.name, source: 'your own device, copied into this job' } : null);
     }
   };
 
