@@ -9,23 +9,48 @@ import type { Job, PointNode, SupplyNode } from '../model/types.js';
 import { resolveRules, type ResolvedRules } from './basis.js';
 import { checkCapacity } from './capacity.js';
 import { blankResult, checkLoop, type LoopFacts } from './check.js';
-import { loadTable } from './design-current.js';
-import { faultTable } from './fault-level.js';
+import { loadTable, type LoadTable } from './design-current.js';
+import { faultTable, faultTableWithLink, type FaultTable } from './fault-level.js';
 import { findFixes } from './fixes.js';
 import { largestSource, sourcePhasor } from './headroom.js';
 import { correctedReading, correctionFactor, readingTemperature, testLimit } from './measured.js';
-import { phaseTable, asPhases } from './phases.js';
+import { phaseTable, asPhases, type PhaseTable } from './phases.js';
 import type { CircuitResult, CheckStatus, Results, Status, SupplyResult, Summary } from './results.js';
 import { Sums } from './sums.js';
 import { atMost } from './tolerance.js';
-import { dropTable, voltageDropLimit } from './voltage-drop.js';
+import { dropTable, dropTableWithLink, voltageDropLimit, type DropTable } from './voltage-drop.js';
 import { checkWithstand } from './withstand.js';
 import { worstPath } from './worst-path.js';
 
 const kA = (a: number): string => `${(a / 1000).toFixed(2)} kA`;
 const orNull = (v: number): number | null => (Number.isNaN(v) ? null : v);
 
+/** A finished analysis: the results and what produced them, for a quick re-analysis after an edit. */
+export interface Analysis {
+  readonly job: Job;
+  readonly results: Results;
+  /** Internal: the passes' values. */
+  readonly state: State;
+}
+
+interface State {
+  rules: ResolvedRules;
+  sums: Sums;
+  phases: PhaseTable;
+  loads: LoadTable;
+  drops: DropTable;
+  faults: FaultTable;
+  facts: LoopFacts[];
+  circuits: CircuitResult[];
+  /** The largest source impedance each checked link tolerates (NaN when it does not count). */
+  headroom: Float64Array;
+}
+
 export function analyse(job: Job): Results {
+  return createAnalysis(job).results;
+}
+
+export function createAnalysis(job: Job): Analysis {
   const rules = resolveRules(job.rules);
   const sums = new Sums(job, rules);
   const order = sums.order;
@@ -33,111 +58,185 @@ export function analyse(job: Job): Results {
   const loads = loadTable(order, phases);
   const drops = dropTable(order, phases, loads, rules);
   const faults = faultTable(order, phases, rules);
-
-  const facts: LoopFacts[] = [];
-  const circuits = job.links.map((link, l) => {
-    const result = blankResult(link, order.roles[l]!);
-    const loop = checkLoop(sums, l, result);
-    facts.push(loop);
-    const reached = sums.reached(l);
-    const to = order.linkTo[l]!;
-    const from = order.linkFrom[l]!;
-    const notes = result.notes;
-    result.phases = asPhases(phases.link[l]!);
-
-    // Design current and voltage drop.
-    result.designCurrent = orNull(loads.ib[l]!);
-    result.powerFactor = orNull(loads.pf[l]!);
-    result.voltageDrop = orNull(drops.own[l]!);
-    const far = to >= 0 && order.nodes[to]!.kind === 'point' ? (order.nodes[to] as PointNode) : null;
-    result.voltageDropLimit = voltageDropLimit(link, far, rules);
-    if (result.voltageDrop !== null && reached) {
-      const total = drops.atNode[to]!;
-      result.voltageDropTotal = total;
-      if (result.voltageDropLimit !== null) {
-        result.voltageStatus = atMost(total, result.voltageDropLimit) ? 'pass' : 'fail';
-        if (result.voltageStatus === 'fail') {
-          notes.push(`voltage drop: the total ${total.toFixed(2)} % from the supply to ${link.to} exceeds the limit ${result.voltageDropLimit} %`);
-        }
-      }
-    }
-
-    // Capacity: Ib ≤ In ≤ Iz.
-    const rating = loop.device ? loop.device.rating : null;
-    const capacity = checkCapacity(link, result.phases, result.designCurrent, rating, rules);
-    result.capacity = capacity.iz;
-    result.capacityStatus = capacity.status;
-    notes.push(...capacity.notes);
-
-    // Fault level at the origin and the breaking capacity of the link's own device.
-    if (reached && from >= 0) {
-      const imax = faults.imax[from]!;
-      if (imax === Infinity) notes.push('no impedance in the fault path: the maximum fault level cannot be computed');
-      else result.faultLevel = orNull(imax);
-    }
-    const own = link.device;
-    if (own?.breaking !== undefined && result.faultLevel !== null) {
-      result.breakingStatus = own.breaking * 1000 >= result.faultLevel * (1 - 1e-9) ? 'pass' : 'fail';
-      if (result.breakingStatus === 'fail') {
-        notes.push(`breaking capacity: the device's ${own.breaking} kA is below the ${kA(result.faultLevel)} maximum prospective fault current at its origin`);
-      }
-    }
-
-    // Withstand of the protective conductor.
-    const withstand = checkWithstand(link, loop.device, loop.ze !== null, result.faultCurrent, loop.zeroLoop, result.clearingTime);
-    result.earthMinArea = withstand.earthMinArea;
-    result.withstandStatus = withstand.status;
-    notes.push(...withstand.notes);
-
-    // Measured reading and the test limit.
-    measuredResult(result, loop, l, sums, rules);
-    return result;
-  });
-
+  const state: State = { rules, sums, phases, loads, drops, faults, facts: [], circuits: [], headroom: new Float64Array(job.links.length).fill(NaN) };
+  for (let l = 0; l < job.links.length; l++) checkOne(state, l);
   // Fixes need the protecting link's design current, known only now.
-  job.links.forEach((link, l) => {
-    const result = circuits[l]!;
-    const p = facts[l]!.protecting;
-    result.fixes = findFixes({
-      link,
-      result,
-      facts: facts[l]!,
-      rules,
-      protecting: p >= 0 ? job.links[p]! : null,
-      protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
-      ib: result.designCurrent,
-      pf: result.powerFactor,
-    });
-    result.verdict = verdictOf(result);
-  });
+  for (let l = 0; l < job.links.length; l++) finishOne(state, l);
+  return { job, results: resultsOf(state), state };
+}
 
+/**
+ * The analysis of `job` after an edit of `previous.job`. When the only change is one link's
+ * cable length, only what that changes is redone: the link's impedance and drop, the sums of the
+ * subtree below it, the checks of the links in that subtree, then the supplies' headroom, the
+ * worst path and the summary. Any other change is analysed afresh.
+ */
+export function reanalyse(previous: Analysis, job: Job): Analysis {
+  const l = onlyLengthChanged(previous.job, job);
+  if (l < 0) return createAnalysis(job);
+  const prev = previous.state;
+  const sums = prev.sums.withLinkChanged(job, l);
+  const order = sums.order;
+  const state: State = {
+    ...prev,
+    sums,
+    drops: dropTableWithLink(prev.drops, order, prev.phases, prev.loads, prev.rules, l),
+    faults: faultTableWithLink(prev.faults, order, prev.phases, prev.rules, l),
+    facts: prev.facts.slice(),
+    circuits: prev.circuits.slice(),
+    headroom: prev.headroom.slice(),
+  };
+  const redo: number[] = [l];
+  const to = order.linkTo[l]!;
+  if (to >= 0 && order.feederOf[to] === l) {
+    const { start, end } = order.subtree(to);
+    for (let k = start + 1; k < end; k++) {
+      const f = order.feederOf[order.pre[k]!]!;
+      if (f >= 0) redo.push(f);
+    }
+  }
+  for (const k of redo) checkOne(state, k);
+  for (const k of redo) finishOne(state, k);
+  return { job, results: resultsOf(state), state };
+}
+
+/** The index of the one link whose cable length alone differs, or −1. */
+function onlyLengthChanged(before: Job, after: Job): number {
+  if (before.rules !== after.rules || before.nodes !== after.nodes && !sameItems(before.nodes, after.nodes)) return -1;
+  if (before.links.length !== after.links.length) return -1;
+  let changed = -1;
+  for (let i = 0; i < after.links.length; i++) {
+    if (before.links[i] === after.links[i]) continue;
+    if (changed >= 0) return -1;
+    changed = i;
+  }
+  if (changed < 0) return -1;
+  const a = before.links[changed]!;
+  const b = after.links[changed]!;
+  const { cable: ca, ...restA } = a;
+  const { cable: cb, ...restB } = b;
+  const { length: _la, ...cableA } = ca;
+  const { length: _lb, ...cableB } = cb;
+  return JSON.stringify(restA) === JSON.stringify(restB) && JSON.stringify(cableA) === JSON.stringify(cableB) ? changed : -1;
+}
+
+function sameItems<T>(a: readonly T[], b: readonly T[]): boolean {
+  return a.length === b.length && a.every((x, i) => x === b[i]);
+}
+
+/** Every check of link l from the values the passes left. */
+function checkOne(state: State, l: number): void {
+  const { rules, sums, phases, loads, drops, faults } = state;
+  const order = sums.order;
+  const link = order.links[l]!;
+  const result = blankResult(link, order.roles[l]!);
+  const loop = checkLoop(sums, l, result);
+  state.facts[l] = loop;
+  state.circuits[l] = result;
+  const reached = sums.reached(l);
+  const to = order.linkTo[l]!;
+  const from = order.linkFrom[l]!;
+  const notes = result.notes;
+  result.phases = asPhases(phases.link[l]!);
+
+  // Design current and voltage drop.
+  result.designCurrent = orNull(loads.ib[l]!);
+  result.powerFactor = orNull(loads.pf[l]!);
+  result.voltageDrop = orNull(drops.own[l]!);
+  const far = to >= 0 && order.nodes[to]!.kind === 'point' ? (order.nodes[to] as PointNode) : null;
+  result.voltageDropLimit = voltageDropLimit(link, far, rules);
+  if (result.voltageDrop !== null && reached) {
+    const total = drops.atNode[to]!;
+    result.voltageDropTotal = total;
+    if (result.voltageDropLimit !== null) {
+      result.voltageStatus = atMost(total, result.voltageDropLimit) ? 'pass' : 'fail';
+      if (result.voltageStatus === 'fail') {
+        notes.push(`voltage drop: the total ${total.toFixed(2)} % from the supply to ${link.to} exceeds the limit ${result.voltageDropLimit} %`);
+      }
+    }
+  }
+
+  // Capacity: Ib ≤ In ≤ Iz.
+  const rating = loop.device ? loop.device.rating : null;
+  const capacity = checkCapacity(link, result.phases, result.designCurrent, rating, rules);
+  result.capacity = capacity.iz;
+  result.capacityStatus = capacity.status;
+  notes.push(...capacity.notes);
+
+  // Fault level at the origin and the breaking capacity of the link's own device.
+  if (reached && from >= 0) {
+    const imax = faults.imax[from]!;
+    if (imax === Infinity) notes.push('no impedance in the fault path: the maximum fault level cannot be computed');
+    else result.faultLevel = orNull(imax);
+  }
+  const own = link.device;
+  if (own?.breaking !== undefined && result.faultLevel !== null) {
+    result.breakingStatus = own.breaking * 1000 >= result.faultLevel * (1 - 1e-9) ? 'pass' : 'fail';
+    if (result.breakingStatus === 'fail') {
+      notes.push(`breaking capacity: the device's ${own.breaking} kA is below the ${kA(result.faultLevel)} maximum prospective fault current at its origin`);
+    }
+  }
+
+  // Withstand of the protective conductor.
+  const withstand = checkWithstand(link, loop.device, loop.ze !== null, result.faultCurrent, loop.zeroLoop, result.clearingTime);
+  result.earthMinArea = withstand.earthMinArea;
+  result.withstandStatus = withstand.status;
+  notes.push(...withstand.notes);
+
+  // Measured reading and the test limit.
+  measuredResult(result, loop, l, sums, rules);
+
+  // What this link allows of the source (source headroom).
+  state.headroom[l] = NaN;
+  if (loop.budget !== null && reached) {
+    const supply = order.nodes[order.supplyOf[to]!] as SupplyNode;
+    state.headroom[l] = largestSource(sourcePhasor(supply.source), sums.drawn(to), loop.budget);
+  }
+}
+
+/** The fixes and the verdict of link l, once every link's design current is known. */
+function finishOne(state: State, l: number): void {
+  const { sums, circuits, facts, rules } = state;
+  const link = sums.order.links[l]!;
+  const result = circuits[l]!;
+  const p = facts[l]!.protecting;
+  result.fixes = findFixes({
+    link,
+    result,
+    facts: facts[l]!,
+    rules,
+    protecting: p >= 0 ? sums.order.links[p]! : null,
+    protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
+    ib: result.designCurrent,
+    pf: result.powerFactor,
+  });
+  result.verdict = verdictOf(result);
+}
+
+function resultsOf(state: State): Results {
+  const { sums, phases, faults, circuits, headroom, rules } = state;
+  const order = sums.order;
   const supplies: SupplyResult[] = [];
-  const supplyIndex = new Map<number, SupplyResult>();
-  job.nodes.forEach((node, n) => {
+  const bySupply = new Map<number, SupplyResult>();
+  order.nodes.forEach((node, n) => {
     if (node.kind !== 'supply') return;
     const imax = faults.imax[n]!;
     const entry: SupplyResult = { node: node.id, phases: asPhases(phases.supply[n]!), faultLevel: Number.isFinite(imax) ? imax : null, maxZe: null, minFaultCurrent: null, setBy: null };
     supplies.push(entry);
-    supplyIndex.set(n, entry);
+    bySupply.set(n, entry);
   });
-  circuits.forEach((c, l) => {
-    const f = facts[l]!;
-    if (f.budget === null || !sums.reached(l)) return;
-    const to = order.linkTo[l]!;
-    const s = order.supplyOf[to]!;
-    const entry = supplyIndex.get(s);
-    if (!entry) return;
-    const u = sourcePhasor((order.nodes[s] as SupplyNode).source);
-    const z = largestSource(u, sums.drawn(to), f.budget);
-    if (entry.maxZe === null || z < entry.maxZe) {
+  for (let l = 0; l < headroom.length; l++) {
+    const z = headroom[l]!;
+    if (Number.isNaN(z)) continue;
+    const entry = bySupply.get(order.supplyOf[order.linkTo[l]!]!);
+    if (entry && (entry.maxZe === null || z < entry.maxZe)) {
       entry.maxZe = z;
-      entry.setBy = c.link;
+      entry.setBy = circuits[l]!.link;
     }
-  });
+  }
   for (const entry of supplies) {
     if (entry.maxZe !== null && entry.maxZe > 0) entry.minFaultCurrent = rules.voltage.value / entry.maxZe;
   }
-
   return {
     format: 'loopwright.results',
     version: 2,

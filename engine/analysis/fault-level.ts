@@ -47,33 +47,49 @@ export function faultContribution(link: Link, phases: number, rules: ResolvedRul
 export interface FaultTable {
   /** Imax at each node, A (NaN when unknown, Infinity when the impedance is zero). */
   imax: Float64Array;
+  /** Zsrc + Σ contributions at each node (NaN when unknown). */
+  re: Float64Array;
+  im: Float64Array;
 }
 
 export function faultTable(order: TreeOrder, phases: PhaseTable, rules: ResolvedRules): FaultTable {
-  const { nodes, links, pre, feederOf, linkFrom } = order;
+  const { nodes, pre } = order;
   const re = new Float64Array(nodes.length).fill(NaN);
   const im = new Float64Array(nodes.length).fill(NaN);
-  const u = rules.maxVoltageFactor.value * rules.voltage.value;
   const imax = new Float64Array(nodes.length).fill(NaN);
-  for (const n of pre) {
-    const node = nodes[n]!;
-    const f = feederOf[n]!;
-    if (node.kind === 'supply') {
-      const src = faultSource(node, phases.supply[n]!, rules).z;
-      if (src) {
-        re[n] = src.re;
-        im[n] = src.im;
-      }
-    } else if (f >= 0) {
-      const z = faultContribution(links[f]!, phases.link[f]!, rules);
-      const p = linkFrom[f]!;
-      re[n] = re[p]! + z.re;
-      im[n] = im[p]! + z.im;
-    }
-    if (!Number.isNaN(re[n]!)) {
-      const mag = Math.hypot(re[n]!, im[n]!);
-      imax[n] = mag > 0 ? u / mag : Infinity;
-    }
+  const table = { imax, re, im };
+  for (const n of pre) faultAt(table, order, phases, rules, n);
+  return table;
+}
+
+/** The fault levels over a job in which only link l's cable changed: its subtree is redone. */
+export function faultTableWithLink(prev: FaultTable, order: TreeOrder, phases: PhaseTable, rules: ResolvedRules, l: number): FaultTable {
+  const table = { imax: prev.imax.slice(), re: prev.re.slice(), im: prev.im.slice() };
+  const to = order.linkTo[l]!;
+  if (to >= 0 && order.feederOf[to] === l) {
+    const { start, end } = order.subtree(to);
+    for (let k = start; k < end; k++) faultAt(table, order, phases, rules, order.pre[k]!);
   }
-  return { imax };
+  return table;
+}
+
+/** Zsrc + Σ and Imax at node n, from its parent's (already done). */
+function faultAt(table: FaultTable, order: TreeOrder, phases: PhaseTable, rules: ResolvedRules, n: number): void {
+  const { re, im, imax } = table;
+  const node = order.nodes[n]!;
+  const f = order.feederOf[n]!;
+  if (node.kind === 'supply') {
+    const src = faultSource(node, phases.supply[n]!, rules).z;
+    if (src) {
+      re[n] = src.re;
+      im[n] = src.im;
+    }
+  } else if (f >= 0) {
+    const z = faultContribution(order.links[f]!, phases.link[f]!, rules);
+    const p = order.linkFrom[f]!;
+    re[n] = re[p]! + z.re;
+    im[n] = im[p]! + z.im;
+  }
+  const mag = Math.hypot(re[n]!, im[n]!);
+  imax[n] = Number.isNaN(mag) ? NaN : mag > 0 ? (rules.maxVoltageFactor.value * rules.voltage.value) / mag : Infinity;
 }

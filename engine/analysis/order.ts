@@ -27,6 +27,9 @@ export class TreeOrder {
   readonly childLinks: Int32Array;
   /** Each link's role. */
   readonly roles: LinkRole[];
+  /** Each node's place in `pre` (−1 when outside it) and the size of its subtree there. */
+  readonly prePosition: Int32Array;
+  readonly subtreeSize: Int32Array;
 
   constructor(job: Job) {
     const nodes = job.nodes;
@@ -84,6 +87,16 @@ export class TreeOrder {
     for (let n = 0; n < nn; n++) if (nodes[n]!.kind === 'supply') walkFrom(n, n);
     for (let n = 0; n < nn; n++) if (!placed[n] && this.feederOf[n] === -1) walkFrom(n, -1);
     this.pre = pre.slice(0, count);
+    this.prePosition = new Int32Array(nn).fill(-1);
+    this.subtreeSize = new Int32Array(nn);
+    for (let k = 0; k < count; k++) this.prePosition[this.pre[k]!] = k;
+    for (let k = count - 1; k >= 0; k--) {
+      const n = this.pre[k]!;
+      this.subtreeSize[n]! += 1;
+      const f = this.feederOf[n]!;
+      const parent = f >= 0 ? this.linkFrom[f]! : -1;
+      if (parent >= 0 && this.prePosition[parent]! >= 0 && this.prePosition[parent]! < k) this.subtreeSize[parent]! += this.subtreeSize[n]!;
+    }
 
     this.roles = links.map((link, l) => {
       const to = this.linkTo[l]!;
@@ -92,6 +105,19 @@ export class TreeOrder {
       if (from >= 0 && nodes[from]!.kind === 'supply') return 'consumer-mains';
       return 'submain';
     });
+  }
+
+  /** The same order over another job of exactly the same shape (same ids, ends and feeders). */
+  withJob(job: Job): TreeOrder {
+    const copy = Object.create(TreeOrder.prototype) as TreeOrder;
+    Object.assign(copy, this, { nodes: job.nodes, links: job.links });
+    return copy;
+  }
+
+  /** The nodes of the subtree under node n (n first), as a range of `pre`. */
+  subtree(n: number): { start: number; end: number } {
+    const start = this.prePosition[n]!;
+    return start < 0 ? { start: 0, end: 0 } : { start, end: start + this.subtreeSize[n]! };
   }
 
   /** The node feeding node n through its feeder (−1 at the top). */

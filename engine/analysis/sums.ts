@@ -67,6 +67,35 @@ export class Sums {
     }
   }
 
+  /**
+   * These sums over `job`, a job of the same shape in which only link l's cable changed:
+   * its impedance and the sums of its subtree are redone, everything else is shared or copied.
+   */
+  withLinkChanged(job: Job, l: number): Sums {
+    const copy = Object.create(Sums.prototype) as Sums;
+    const order = this.order.withJob(job);
+    const linkRe = this.linkRe.slice();
+    const linkIm = this.linkIm.slice();
+    const nodeRe = this.nodeRe.slice();
+    const nodeIm = this.nodeIm.slice();
+    const z = linkImpedance(job.links[l]!.cable, this.rules);
+    const dRe = z.re - linkRe[l]!;
+    const dIm = z.im - linkIm[l]!;
+    linkRe[l] = z.re;
+    linkIm[l] = z.im;
+    const to = order.linkTo[l]!;
+    if (to >= 0 && order.feederOf[to] === l) {
+      const { start, end } = order.subtree(to);
+      for (let k = start; k < end; k++) {
+        const n = order.pre[k]!;
+        nodeRe[n]! += dRe;
+        nodeIm[n]! += dIm;
+      }
+    }
+    Object.assign(copy, this, { order, linkRe, linkIm, nodeRe, nodeIm });
+    return copy;
+  }
+
   /** Σ drawn links from the supply to node n. */
   drawn(n: number): Complex {
     return { re: this.nodeRe[n]!, im: this.nodeIm[n]! };

@@ -50,6 +50,25 @@ export function dropTable(order: TreeOrder, phases: PhaseTable, loads: LoadTable
   return { own, atNode };
 }
 
+/** The drops over a job in which only link l's cable changed: its own drop and its subtree's totals. */
+export function dropTableWithLink(prev: DropTable, order: TreeOrder, phases: PhaseTable, loads: LoadTable, rules: ResolvedRules, l: number): DropTable {
+  const own = prev.own.slice();
+  const atNode = prev.atNode.slice();
+  const ib = loads.ib[l]!;
+  own[l] = Number.isNaN(ib) ? NaN : linkVoltageDrop(order.links[l]!, order.links[l]!.cable.active, phases.link[l]!, ib, loads.pf[l]!, rules);
+  const to = order.linkTo[l]!;
+  if (to >= 0 && order.feederOf[to] === l) {
+    const { start, end } = order.subtree(to);
+    for (let k = start; k < end; k++) {
+      const n = order.pre[k]!;
+      const f = order.feederOf[n]!;
+      const v = own[f]!;
+      atNode[n] = atNode[order.linkFrom[f]!]! + (Number.isNaN(v) ? 0 : v);
+    }
+  }
+  return { own, atNode };
+}
+
 /** The voltage-drop limit of a link, %, or null when it does not arrive at a point. */
 export function voltageDropLimit(link: Link, far: PointNode | null, rules: ResolvedRules): number | null {
   if (!far) return null;

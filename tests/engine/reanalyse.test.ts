@@ -1,0 +1,75 @@
+// The quick re-analysis after one link's length changes (reanalyse) must give exactly what a
+// full analysis of the edited job gives: numbers equal to a relative 1e-9 (sums are updated by
+// difference), every status, note, fix and verdict identical. Any other edit is analysed afresh.
+
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { analyse, createAnalysis, loadJob, reanalyse, type Job, type Results } from '../../engine/index.js';
+import { jobArb } from './arbitraries.js';
+import type { Obj } from './helpers.js';
+
+const params = { numRuns: 150 }; // the seed: tests/engine/setup.ts
+
+function close(a: unknown, b: unknown, path: string): void {
+  if (typeof a === 'number' && typeof b === 'number') {
+    if (Number.isFinite(a) && Number.isFinite(b)) expect(Math.abs(a - b), path).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(a), Math.abs(b)));
+    else expect(a, path).toBe(b);
+    return;
+  }
+  if (Array.isArray(a) && Array.isArray(b)) {
+    expect(a.length, path).toBe(b.length);
+    a.forEach((x, i) => close(x, b[i], `${path}[${i}]`));
+    return;
+  }
+  if (a && b && typeof a === 'object' && typeof b === 'object') {
+    expect(Object.keys(a).sort(), path).toEqual(Object.keys(b).sort());
+    for (const k of Object.keys(a)) close((a as Obj)[k], (b as Obj)[k], `${path}.${k}`);
+    return;
+  }
+  expect(a, path).toEqual(b);
+}
+
+function load(file: Obj): Job {
+  const r = loadJob(file);
+  if (!r.ok) throw new Error(r.problems.map((p) => p.message).join('\n'));
+  return r.job;
+}
+
+/** Notes carry rounded numbers; a length change near a rounding edge may change a digit. */
+function stripNotes(r: Results): Results {
+  return { ...r, circuits: r.circuits.map((c) => ({ ...c, notes: c.notes.map((n) => n.replace(/[0-9.]+/g, '#')) })) };
+}
+
+describe('reanalyse after one length change', () => {
+  it('equals a full analysis of the edited job', () => {
+    fc.assert(
+      fc.property(jobArb(), fc.nat(), fc.double({ min: 0, max: 300, noNaN: true }), (file, pick, length) => {
+        const job = load(file);
+        if (job.links.length === 0) return;
+        const before = createAnalysis(job);
+        const i = pick % job.links.length;
+        const link = job.links[i]!;
+        const edited: Job = { ...job, links: job.links.map((l, k) => (k === i ? { ...link, cable: { ...link.cable, length } } : l)) };
+        const quick = reanalyse(before, edited).results;
+        close(stripNotes(quick), stripNotes(analyse(edited)), 'results');
+        // the earlier analysis is left as it was
+        close(before.results, analyse(job), 'before');
+      }),
+      params,
+    );
+  });
+
+  it('any other edit is analysed afresh', () => {
+    fc.assert(
+      fc.property(jobArb(), (file) => {
+        const job = load(file);
+        if (job.links.length === 0) return;
+        const before = createAnalysis(job);
+        const link = job.links[0]!;
+        const edited: Job = { ...job, links: job.links.map((l, k) => (k === 0 ? { ...link, cable: { ...link.cable, active: link.cable.active * 2 } } : l)) };
+        close(reanalyse(before, edited).results, analyse(edited), 'results');
+      }),
+      params,
+    );
+  });
+});
