@@ -82,3 +82,24 @@ describe('importing readings', () => {
     expect(clicked!.hasAttribute('data-import-readings')).toBe(true);
   });
 });
+
+describe('importing readings without a click', () => {
+  it('says where to click when the file chooser cannot open (a command with no user activation, as from a native menu)', () => {
+    const nav = navigator as Navigator & { userActivation?: { isActive: boolean } };
+    Object.defineProperty(nav, 'userActivation', { configurable: true, value: { isActive: false } });
+    let clicked = false;
+    const spy = (e: Event) => {
+      clicked = true;
+      e.preventDefault();
+    };
+    document.addEventListener('click', spy, true);
+    try {
+      void getCommand('readings.import')!.run({} as never);
+    } finally {
+      document.removeEventListener('click', spy, true);
+      delete (nav as { userActivation?: unknown }).userActivation;
+    }
+    expect(clicked).toBe(false);
+    expect(useEditor.getState().message?.text).toMatch(/^To choose a readings file, click Import readings/);
+  });
+});

@@ -4,6 +4,7 @@
 import { useEditor } from '../store/editor.js';
 import { useUi } from '../app/ui.js';
 import { parseReadingsCsv, readingsEdit } from './readings-csv.js';
+import { useTestingView } from '../panels/testing/view.js';
 
 /** A readings file larger than this is refused before it is read (a sheet of readings is small). */
 export const MAX_READINGS_BYTES = 5 * 1024 * 1024;
@@ -68,7 +69,20 @@ function readingsInput(): HTMLInputElement {
   return input;
 }
 
-/** Opens the file chooser for a readings file. */
+/**
+ * Opens the file chooser for a readings file. A browser opens it only from a click or a key
+ * (user activation): a command that arrives without one (the desktop app's native menu) says
+ * where to click instead of silently doing nothing.
+ */
 export function importReadings(): void {
+  const activation = (navigator as Navigator & { userActivation?: { isActive: boolean } }).userActivation;
+  if (activation && !activation.isActive) {
+    useTestingView.getState().setView('testing');
+    useEditor.getState().setMessage({
+      kind: 'info',
+      text: 'To choose a readings file, click Import readings (on the toolbar or in the testing view): the file chooser opens from a click',
+    });
+    return;
+  }
   readingsInput().click();
 }
