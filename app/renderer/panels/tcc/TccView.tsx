@@ -131,6 +131,7 @@ export function TccView({ linkId }: { linkId: string }) {
     <section className="lwt" aria-label={`Time–current view for ${linkId}`} data-tcc={linkId}>
       <h4>Time–current view</h4>
       <p className="lwt-status">
+        <span className="lwt-status-name">Loop check</span>
         <span className={`lwp-status ${look.className}`} data-tcc-status={r.status}>
           <span aria-hidden="true">{look.symbol}</span> {look.word}
         </span>{' '}
