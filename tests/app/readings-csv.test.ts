@@ -69,7 +69,7 @@ describe('readings CSV: refusals name the line and column', () => {
   it('refuses an unknown link id, naming a node id for what it is', () => {
     expect(problems('link,zs\nC1,0.5\nC9,0.7\nS1,0.2\n')).toEqual([
       'line 3, column 1 (link id): there is no link "C9" in this job',
-      'line 4, column 1 (link id): there is no link "S1" in this job (S1 is a supply: enter its measured Ze in the details panel)',
+      'line 4, column 1 (link id): there is no link "S1" in this job (S1 is a supply: enter its measured Ze in the testing view or the details panel)',
     ]);
   });
 

@@ -130,6 +130,25 @@ describe('testing view', () => {
     expect(linkOf('C3').measured).toEqual({ zs: 1.2, temperature: 15 });
   });
 
+  it('takes each supply’s measured Ze, with which the circuits’ readings are corrected, as one undoable edit', () => {
+    load(sampleJob('known'));
+    const { container } = openTesting();
+    typeAndPress(cell(container, 'C1', 'zs'), '0.7', 'Enter');
+    const before = useEditor.getState().resultById.C1!.measured!.corrected;
+    const ze = container.querySelector<HTMLInputElement>('[data-testing-ze="S1"]')!;
+    typeAndPress(ze, '0.25', 'Enter');
+    const supply = useEditor.getState().job.nodes.find((n) => n.id === 'S1')!;
+    expect(supply.kind === 'supply' && supply.measured).toEqual({ ze: 0.25 });
+    // method-depth.md section 7: corrected = Zem + (Zsm − Zem)·F, so a measured Ze changes it.
+    expect(useEditor.getState().resultById.C1!.measured!.corrected).not.toBe(before);
+    typeAndPress(ze, '-1', 'Enter');
+    expect(container.querySelector('[data-testing-error="S1:ze"]')!.textContent).toBe('Measured Ze must be greater than 0 Ω, got -1');
+    act(() => useEditor.getState().undo());
+    const after = useEditor.getState().job.nodes.find((n) => n.id === 'S1')!;
+    expect(after.kind === 'supply' && after.measured).toBeUndefined();
+    expect(useEditor.getState().resultById.C1!.measured!.corrected).toBe(before);
+  });
+
   it('is a command on the View menu', () => {
     const command = getCommand('view.testing')!;
     expect(command.group).toBe('view');

@@ -233,7 +233,7 @@ export function parseReadingsCsv(text: string, job: Pick<Job, 'links' | 'nodes'>
     if (id === '') fail(`${where('link')}: the link id is empty`);
     else if (!links.has(id)) {
       const kind = nodes.get(id);
-      fail(`${where('link')}: there is no link ${show(id)} in this job${kind === 'supply' ? ` (${id} is a supply: enter its measured Ze in the details panel)` : kind ? ` (${id} is a ${kind}, not a link)` : ''}`);
+      fail(`${where('link')}: there is no link ${show(id)} in this job${kind === 'supply' ? ` (${id} is a supply: enter its measured Ze in the testing view or the details panel)` : kind ? ` (${id} is a ${kind}, not a link)` : ''}`);
     } else if (seen.has(id)) fail(`${where('link')}: ${id} has a reading already on line ${seen.get(id)}; give one reading per link`);
     else seen.set(id, rec.line);
 

@@ -4,16 +4,17 @@
 // Tab and Shift+Tab the next and previous cell. Every committed cell is one undoable edit.
 
 import { memo, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
-import { CAUTION, resolveRules, type LinkReading } from '../../../../engine/index.js';
+import { CAUTION, resolveRules, type LinkReading, type SupplyNode } from '../../../../engine/index.js';
 import { runCommand } from '../../commands/context.js';
 import { selectLink, selectResult, useEditor } from '../../store/index.js';
-import { editLink } from '../actions.js';
+import { editLink, editNode } from '../actions.js';
 import { StatusBadge } from '../details/CircuitResults.js';
 import { parseNumber, showNumber, type NumberRule } from '../fields/parse.js';
 import type { Outcome } from '../fields/fields.js';
 import { STATUS_LOOK, ohmsValue, percentValue } from '../format.js';
 import { readingChange, READING_FIELDS, type ReadingField } from './readings.js';
 import { useTestingView, type ScheduleView } from './view.js';
+import { useShallow } from 'zustand/react/shallow';
 import './testing.css';
 
 const RULES: Record<'zs' | 'temperature', NumberRule> = {
@@ -223,6 +224,64 @@ const TestingRow = memo(function TestingRow({ id, row, fixedFactor }: { id: stri
   );
 });
 
+/** Commits a supply's measured Ze (empty removes the reading): one undoable edit. */
+function commitZe(supply: SupplyNode, text: string): Outcome {
+  const parsed = parseNumber(text, { label: 'Measured Ze', unit: 'Ω', above: 0, optional: true });
+  if (!parsed.ok) return { ok: false, reason: parsed.reason };
+  const session = useTestingView.getState().session;
+  const measured = parsed.value === undefined
+    ? undefined
+    : {
+        ze: parsed.value,
+        ...(supply.measured
+          ? { ...(supply.measured.date ? { date: supply.measured.date } : {}), ...(supply.measured.instrument ? { instrument: supply.measured.instrument } : {}) }
+          : { ...(session.date ? { date: session.date } : {}), ...(session.instrument ? { instrument: session.instrument } : {}) }),
+      };
+  return editNode(supply.id, 'measured', measured, measured ? `measured Ze of ${supply.id}` : `remove the measured Ze of ${supply.id}`);
+}
+
+/** Each supply's measured Ze: the readings of its circuits are corrected with it. */
+function SupplyReadings() {
+  const supplies = useEditor(useShallow((s) => s.job.nodes.filter((n): n is SupplyNode => n.kind === 'supply')));
+  if (supplies.length === 0) return null;
+  return (
+    <div className="lwt-supplies" data-testing-supplies>
+      {supplies.map((n) => (
+        <SupplyZe key={n.id} supply={n} />
+      ))}
+    </div>
+  );
+}
+
+function SupplyZe({ supply }: { supply: SupplyNode }) {
+  const shown = supply.measured ? showNumber(supply.measured.ze) : '';
+  const [text, setText] = useState(shown);
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    setText(shown);
+    setError(null);
+  }, [shown]);
+  const run = () => {
+    if (text === shown) return;
+    const outcome = commitZe(supply, text);
+    setError(outcome.ok ? null : outcome.reason);
+    if (!outcome.ok) setText(shown);
+  };
+  return (
+    <label className="lwt-supply">
+      Measured Ze of {supply.id}{supply.name ? ` (${supply.name})` : ''}
+      <input className="lwp-input lwt-input-zs" inputMode="decimal" data-testing-ze={supply.id} value={text} placeholder="not measured"
+        aria-label={`Measured Ze of ${supply.id} (Ω)`} aria-invalid={error ? true : undefined}
+        onChange={(e) => setText(e.target.value)} onBlur={run}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') run();
+          else if (e.key === 'Escape') setText(shown);
+        }} /> Ω
+      {error ? <span className="lwp-field-error" role="alert" data-testing-error={`${supply.id}:ze`}>{error}</span> : null}
+    </label>
+  );
+}
+
 /** The day's defaults for new readings. */
 function SessionDefaults() {
   const session = useTestingView((s) => s.session);
@@ -287,6 +346,7 @@ export function TestingView() {
         </button>
       </header>
       <SessionDefaults />
+      <SupplyReadings />
       <div className="lwp-schedule-body" data-testing-grid>
         <table className="lwp-schedule-table lwt-table">
           <thead>
