@@ -30,6 +30,8 @@ export interface Layout {
   paletteCollapsed?: boolean;
   /** The details column folded to a strip. */
   rightCollapsed?: boolean;
+  /** The sheet's overview map shown (default) or hidden. */
+  minimap?: boolean;
 }
 
 const LAYOUT_KEY = 'loopwright.layout';
@@ -46,6 +48,7 @@ function readLayout(): Layout {
       ...(v.breakdownDock === 'schedule' || v.breakdownDock === 'sheet' ? { breakdownDock: v.breakdownDock } : {}),
       ...(v.paletteCollapsed === true ? { paletteCollapsed: true } : {}),
       ...(v.rightCollapsed === true ? { rightCollapsed: true } : {}),
+      ...(v.minimap === false ? { minimap: false } : {}),
     };
   } catch {
     return none;

@@ -2,7 +2,7 @@
 // user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
 import { useCallback, useEffect, useMemo, useRef, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
-  Background, BackgroundVariant, ConnectionLineType, Controls, MiniMap, ReactFlow, getViewportForBounds, useReactFlow,
+  Background, BackgroundVariant, ConnectionLineType, MiniMap, ReactFlow, getViewportForBounds, useReactFlow, useStore,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
 } from '@xyflow/react';
 import type { NodeKind } from '../../../engine/index.js';
@@ -12,7 +12,7 @@ import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
 import { flowList, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
 import { selectSearchable } from '../store/selectors.js';
-import { setSheetHandle } from './handle.js';
+import { getSheetHandle, setSheetHandle } from './handle.js';
 import { NODE_SIZE, newPart } from './parts.js';
 import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
 import { useUi } from '../app/ui.js';
@@ -64,6 +64,33 @@ function flushMoves(): void {
   const moves = [...pendingMoves.values()];
   pendingMoves.clear();
   useEditor.getState().moveLive(moves);
+}
+
+/** After Fit the whole job is in view: the first view's "part of the job is out of view" goes. */
+export function clearPartViewNote(): void {
+  const s = useEditor.getState();
+  const text = s.message?.text;
+  if (!text || s.message?.kind !== 'info' || !text.toLowerCase().includes(PART_VIEW_NOTE.toLowerCase())) return;
+  const rest = text.replace(` — ${PART_VIEW_NOTE}`, '').replace(PART_VIEW_NOTE.charAt(0).toUpperCase() + PART_VIEW_NOTE.slice(1), '').trim();
+  s.setMessage(rest ? { kind: 'info', text: rest } : { kind: 'info', text: 'The whole job is in view' });
+}
+
+/**
+ * Zoom out, the zoom level, zoom in and Fit, in a bar under the drawing rather than over it, so
+ * they never cover a label; and the overview map shown or hidden.
+ */
+function ZoomBar({ map, onMap }: { map: boolean; onMap(v: boolean): void }) {
+  const flow = useReactFlow();
+  const zoom = useStore((st) => st.transform[2]);
+  return (
+    <div className="lw-zoombar" role="toolbar" aria-label="Zoom">
+      <button type="button" data-zoom="out" aria-label="Zoom out" title="Zoom out" onClick={() => void flow.zoomOut({ duration: 150 })}>−</button>
+      <span className="lw-zoom-level" data-zoom-level aria-live="polite">{Math.round(zoom * 100)} %</span>
+      <button type="button" data-zoom="in" aria-label="Zoom in" title="Zoom in" onClick={() => void flow.zoomIn({ duration: 150 })}>+</button>
+      <button type="button" data-zoom="fit" title="Zoom to Fit (Shift+1)" onClick={() => getSheetHandle()?.fit()}>Fit</button>
+      <label className="lw-zoom-map"><input type="checkbox" checked={map} data-zoom="map" onChange={(e) => onMap(e.currentTarget.checked)} /> Overview map</label>
+    </div>
+  );
 }
 
 export interface SheetProps {
@@ -122,7 +149,10 @@ export function Sheet({ onContextMenu }: SheetProps) {
 
   useEffect(() => {
     setSheetHandle({
-      fit: () => void flow.fitView({ padding: FIT_PADDING, duration: useEditor.getState().job.nodes.length > LARGE ? 0 : 250 }),
+      fit: () => {
+        void flow.fitView({ padding: FIT_PADDING, duration: useEditor.getState().job.nodes.length > LARGE ? 0 : 250 });
+        clearPartViewNote();
+      },
       centre,
       cursor: () => {
         if (cursor.current) return cursor.current;
@@ -293,7 +323,10 @@ export function Sheet({ onContextMenu }: SheetProps) {
 
   // Above this size only what is in view is drawn (every link still has its result in the schedule).
   const large = jobNodes.length > LARGE;
+  const map = useUi((u) => u.layout.minimap !== false);
+  const setMap = useCallback((v: boolean) => useUi.getState().setLayout({ minimap: v }), []);
   return (
+    <div className="lw-sheet-frame">
     <div className="lw-sheet" ref={wrapper} onFocusCapture={onFocusCapture} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
       <ReactFlow
         nodes={nodes}
@@ -318,10 +351,11 @@ export function Sheet({ onContextMenu }: SheetProps) {
         proOptions={PRO_OPTIONS}
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
-        <Controls showInteractive={false} />
         {/* Top right: a tree drawn down from its supply leaves that corner empty, where the bottom right held its widest row. */}
-        {!large && <MiniMap position="top-right" pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
+        {!large && map && <MiniMap position="top-right" pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
       </ReactFlow>
+    </div>
+    <ZoomBar map={map} onMap={setMap} />
     </div>
   );
 }
