@@ -24,8 +24,8 @@ export function generalHelp(commands: Readonly<Record<string, Command>>): string
   }
   lines.push(
     '',
-    'Exit status: 0 success (every checked circuit passes); 1 a circuit fails or relies on an RCD;',
-    '2 the job could not be read or the command line was wrong.',
+    'Exit status: 0 success (no link\'s verdict fails or relies on an RCD, over every check); 1 a',
+    'verdict fails or relies on an RCD; 2 the job could not be read or the command line was wrong.',
     '',
     `Run \`${RUN} COMMAND --help\` for one command in full.`,
   );

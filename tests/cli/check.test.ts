@@ -39,6 +39,18 @@ describe('check on a passing job', () => {
     expect(run.stderr).toBe('');
     const printed: unknown = JSON.parse(run.stdout);
     expect(printed).toEqual(JSON.parse(JSON.stringify(analyse(loaded.job))));
+    // Results version 2: the new fields reach standard output (job-format.md, results document, version 2).
+    const doc = printed as { version: number; supplies: unknown[]; summary: Record<string, unknown>; circuits: Array<Record<string, unknown>> };
+    expect(doc.version).toBe(2);
+    expect(Array.isArray(doc.supplies)).toBe(true);
+    expect(Object.keys(doc.summary)).toEqual(expect.arrayContaining(['verdict', 'checks']));
+    for (const c of doc.circuits) {
+      expect(Object.keys(c)).toEqual(expect.arrayContaining([
+        'phases', 'designCurrent', 'powerFactor', 'voltageDrop', 'voltageDropTotal', 'voltageDropLimit', 'voltageStatus',
+        'capacity', 'capacityStatus', 'faultLevel', 'breakingStatus', 'earthMinArea', 'withstandStatus', 'testLimit',
+        'measured', 'fixes', 'verdict',
+      ]));
+    }
     // The same job is the example in /work/shared/job-format.md (results document, version 1);
     // values worked by hand from method.md: own = 0.0225·32·(1/2.5 + 1/2.5) with X = 2·0.08 mΩ·32,
     // limit = 0.8·230/(7.5·20), Lmax = limit / |z per metre|.
