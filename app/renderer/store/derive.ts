@@ -30,14 +30,15 @@ export function validationInput(base: Job | null, next: Job): Record<string, unk
     const a = base.links[i]!;
     const b = next.links[i]!;
     if (a === b) continue;
-    if (a.id !== b.id || a.from !== b.from || a.to !== b.to) return file;
+    // The phase rules span the whole path (method-depth.md section 1): a phases change gets the whole job.
+    if (a.id !== b.id || a.from !== b.from || a.to !== b.to || a.phases !== b.phases) return file;
     links[i] = b;
     ends.add(b.from).add(b.to);
   }
   for (let i = 0; i < next.nodes.length; i++) {
     const a = base.nodes[i]!;
     const b = next.nodes[i]!;
-    if (a !== b && (a.id !== b.id || a.kind !== b.kind)) return file;
+    if (a !== b && (a.id !== b.id || a.kind !== b.kind || ('phases' in a ? a.phases : undefined) !== ('phases' in b ? b.phases : undefined))) return file;
     if (a !== b || ends.has(b.id)) nodes[i] = b;
   }
   return { ...file, nodes, links };
