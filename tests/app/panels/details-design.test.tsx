@@ -105,9 +105,20 @@ describe('details panel: a link\u2019s version 2 fields', () => {
     choose(field<HTMLSelectElement>(container, 'phases'), '3');
     const error = fieldError(container, 'phases');
     expect(error?.getAttribute('role')).toBe('alert');
-    // The engine's message names the place of the problem.
-    expect(error?.textContent).toMatch(/(nodes|links)\[\d+\] \((P1|C1)\)/);
-    expect(error?.textContent).toMatch(/phase/i);
+    // The engine's message names the point and the link that feeds it.
+    expect(error?.textContent).toMatch(/P1/);
+    expect(error?.textContent).toMatch(/C1/);
+    expect(error?.textContent).toMatch(/three-phase feed/);
+    expect(field<HTMLSelectElement>(container, 'phases').value).toBe('');
+    expect(useEditor.getState().job).toBe(before);
+  });
+
+  it('refuses a three-phase link under a single-phase supply, with the engine\u2019s reason', () => {
+    const { container } = render(<DetailsPanel />);
+    select('links', 'C3');
+    const before = useEditor.getState().job;
+    choose(field<HTMLSelectElement>(container, 'phases'), '3');
+    expect(fieldError(container, 'phases')?.textContent).toMatch(/single-phase supply S1/);
     expect(useEditor.getState().job).toBe(before);
   });
 

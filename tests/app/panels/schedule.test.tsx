@@ -50,6 +50,7 @@ describe('circuit schedule', () => {
 
   it('gives every column of numbers its unit in the head', () => {
     const { container } = render(<SchedulePanel />);
+    fireEvent.click(byHook(container, 'data-column-set', 'all'));
     const units = Object.fromEntries(
       [...container.querySelectorAll('[data-unit]')].map((el) => [el.getAttribute('data-unit'), el.textContent!.trim()]),
     );
@@ -80,6 +81,7 @@ describe('circuit schedule', () => {
 
   it('gives the full name and the node names on hover', () => {
     const { container } = render(<SchedulePanel />);
+    fireEvent.click(byHook(container, 'data-column-set', 'all'));
     const row = byHook<HTMLElement>(container, 'data-schedule-row', 'C1');
     expect(byHook(row, 'data-cell', 'name').getAttribute('title')).toBe('Kitchen power');
     const nodes = [...row.querySelectorAll('.lwp-cell-node')].map((td) => td.getAttribute('title'));
