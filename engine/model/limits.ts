@@ -11,7 +11,8 @@
 // - elements: at most 200,000 list items, counted over every list in the file at any depth:
 //   each node, each link, each point of a device's curve and each number in a point, each item
 //   of a list under a key the program does not know. Object members are not counted (the size
-//   limit bounds them). A board with 90,000 circuits has 180,003 nodes and links.
+//   limit bounds them). A supply, one board and 90,000 circuits on it make 180,003 nodes and
+//   links.
 // - nesting: at most 8 levels of objects and lists. The file object is level 1; the deepest
 //   the format itself goes is 6 (file → links → a link → its device → points → one point), and
 //   2 more are left for data kept under unknown keys.

@@ -35,3 +35,30 @@ export function generateJob(points: number, boards = Math.max(1, Math.ceil(point
   job.links = links;
   return job;
 }
+
+/** A chain of `boards` boards, each fed from the one before, with one circuit at the far end
+ *  (invented data): the deepest tree the element limit allows. */
+export function generateChain(boards: number): Job {
+  const job = newJob();
+  job.job.title = `Generated chain of ${boards} boards`;
+  const nodes: JobNode[] = [{ id: 'S1', kind: 'supply', name: 'Supply', at: { x: 0, y: 0 }, source: { type: 'fault-current', current: 20000 } }];
+  const links: Link[] = [];
+  let from = 'S1';
+  for (let b = 1; b <= boards; b++) {
+    nodes.push({ id: `B${b}`, kind: 'board', name: `Board ${b}`, at: { x: 0, y: b * 160 } });
+    links.push({ id: `L${b}`, from, to: `B${b}`, cable: { length: 0.5, material: 'Cu', active: 240, earth: 120 }, device: { type: 'mcb', curve: 'C', rating: 63 } });
+    from = `B${b}`;
+  }
+  nodes.push({ id: 'P1', kind: 'point', name: 'Far circuit', use: 'other', at: { x: 0, y: (boards + 1) * 160 } });
+  links.push({ id: 'C1', from, to: 'P1', cable: { length: 10, material: 'Cu', active: 2.5, earth: 2.5 }, device: { type: 'mcb', curve: 'C', rating: 16 } });
+  job.nodes = nodes;
+  job.links = links;
+  return job;
+}
+
+/** One board with `circuits` final subcircuits on it (invented data): the widest tree. */
+export function generateWideBoard(circuits: number): Job {
+  const job = generateJob(circuits, 1);
+  job.job.title = `Generated board with ${circuits} circuits`;
+  return job;
+}
