@@ -7,7 +7,7 @@ import { readingChange } from '../../app/renderer/panels/testing/readings.js';
 import { useTestingView } from '../../app/renderer/panels/testing/view.js';
 import { getCommand } from '../../app/renderer/commands/registry.js';
 import { useEditor } from '../../app/renderer/store/index.js';
-import { linkOf, load, sampleJob } from './panels/fixture.js';
+import { largeJob, linkOf, load, sampleJob } from './panels/fixture.js';
 
 function cell(container: ParentNode, link: string, field: string): HTMLInputElement {
   const el = container.querySelector<HTMLInputElement>(`[data-testing-link="${link}"][data-testing-cell="${field}"]`);
@@ -147,6 +147,22 @@ describe('testing view', () => {
     const after = useEditor.getState().job.nodes.find((n) => n.id === 'S1')!;
     expect(after.kind === 'supply' && after.measured).toBeUndefined();
     expect(useEditor.getState().resultById.C1!.measured!.corrected).toBe(before);
+  });
+
+  it('on a large job renders only the rows in view, and Enter on the last one drawn brings the next into view and into focus', () => {
+    load(largeJob(1000));
+    const { container } = openTesting();
+    const drawn = () => [...container.querySelectorAll('[data-testing-row]')].map((r) => r.getAttribute('data-testing-row')!);
+    expect(container.querySelector('[data-testing-grid]')!.getAttribute('data-windowed')).toBe('true');
+    const rows = drawn();
+    expect(rows.length).toBeLessThan(100);
+    const last = rows.at(-1)!;
+    const next = useEditor.getState().job.links[rows.length]!.id;
+    expect(drawn()).not.toContain(next);
+    typeAndPress(cell(container, last, 'zs'), '0.9', 'Enter');
+    expect(linkOf(last).measured).toEqual({ zs: 0.9 });
+    expect(drawn()).toContain(next);
+    expect(document.activeElement).toBe(cell(container, next, 'zs'));
   });
 
   it('is a command on the View menu', () => {

@@ -3,7 +3,7 @@
 // keyboard: Enter (or ↓) goes to the same cell of the next row, Shift+Enter (or ↑) the row above,
 // Tab and Shift+Tab the next and previous cell. Every committed cell is one undoable edit.
 
-import { memo, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { createContext, memo, useCallback, useContext, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { CAUTION, resolveRules, type LinkReading, type SupplyNode } from '../../../../engine/index.js';
 import { runCommand } from '../../commands/context.js';
 import { selectLink, selectResult, useEditor } from '../../store/index.js';
@@ -42,11 +42,30 @@ function cellSelector(row: number, col: number): string {
   return `[data-tcell="${row}:${col}"]`;
 }
 
-/** Moves the focus to another cell of the grid; false when there is none there. */
-function focusCell(from: HTMLElement, row: number, col: number): boolean {
-  const grid = from.closest('[data-testing-grid]');
-  const target = grid?.querySelector<HTMLInputElement>(cellSelector(row, col));
-  if (!target) return false;
+/** Above this many circuits only the rows in view are rendered (as in the design schedule). */
+export const TESTING_WINDOW_THRESHOLD = 300;
+export const TESTING_ROW_HEIGHT = 34;
+const OVERSCAN = 10;
+const FALLBACK_VIEW_HEIGHT = 600;
+
+/** Rows in view for a scroll position: [first, last) plus overscan. */
+export function testingWindow(count: number, scrollTop: number, viewHeight: number): [number, number] {
+  const first = Math.max(0, Math.floor(scrollTop / TESTING_ROW_HEIGHT) - OVERSCAN);
+  const last = Math.min(count, Math.ceil((scrollTop + viewHeight) / TESTING_ROW_HEIGHT) + OVERSCAN);
+  return [first, last];
+}
+
+/** The grid's way to reach a row that is not rendered yet (scrolled out of a windowed view). */
+const GridContext = createContext<{ count: number; reveal(row: number, col: number): void }>({ count: 0, reveal: () => undefined });
+
+/** Moves the focus to another cell of the grid; false when there is no such row. */
+function focusCell(from: HTMLElement, row: number, col: number, grid: { count: number; reveal(row: number, col: number): void }): boolean {
+  if (row < 0 || row >= grid.count) return false;
+  const target = from.closest('[data-testing-grid]')?.querySelector<HTMLInputElement>(cellSelector(row, col));
+  if (!target) {
+    grid.reveal(row, col);
+    return true;
+  }
   target.focus();
   target.select();
   return true;
@@ -66,6 +85,7 @@ interface CellProps {
 
 /** One input of the grid: local text, committed on Enter, Tab, arrows or leaving it. */
 function Cell({ row, col, link, field, shown, placeholder, draft, commit }: CellProps) {
+  const grid = useContext(GridContext);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   // The text last committed (or refused), so the blur that follows a keyboard move does not commit it again.
@@ -108,7 +128,7 @@ function Cell({ row, col, link, field, shown, placeholder, draft, commit }: Cell
       e.preventDefault(); // stay on the refused cell, its reason beside it
       return;
     }
-    if (focusCell(el, to[0], to[1])) e.preventDefault();
+    if (focusCell(el, to[0], to[1], grid)) e.preventDefault();
     else if (e.key === 'Enter') e.preventDefault();
   };
 
@@ -200,7 +220,7 @@ const TestingRow = memo(function TestingRow({ id, row, fixedFactor }: { id: stri
   };
   const sessionTemp = session.temperature !== undefined ? showNumber(session.temperature) : '20';
   return (
-    <tr className="lwp-row lwt-row" data-testing-row={id}>
+    <tr className="lwp-row lwt-row" data-testing-row={id} style={{ height: TESTING_ROW_HEIGHT }}>
       <th scope="row" className="lwt-circuit" title={link.name ? `${id} — ${link.name}` : id}>
         <span className="lwt-id">{id}</span>
         {link.name ? <span className="lwt-name">{link.name}</span> : null}
@@ -325,7 +345,42 @@ export function TestingView() {
   const rulesInput = useEditor((s) => s.job.rules);
   const counts = useEditor((s) => s.results.summary.checks.measured);
   const fixedFactor = useMemo(() => resolveRules(rulesInput).measuredRule.value === 'fixed-factor', [rulesInput]);
-  const withReading = links.filter((l) => l.measured !== undefined).length;
+  const withReading = useMemo(() => links.filter((l) => l.measured !== undefined).length, [links]);
+  const body = useRef<HTMLDivElement>(null);
+  const [scrollTop, setScrollTop] = useState(0);
+  const [viewHeight, setViewHeight] = useState(FALLBACK_VIEW_HEIGHT);
+  const pending = useRef<[number, number] | null>(null);
+  const windowed = links.length > TESTING_WINDOW_THRESHOLD;
+  useLayoutEffect(() => {
+    const el = body.current;
+    if (!el) return;
+    const measure = () => setViewHeight(el.clientHeight > 0 ? el.clientHeight : FALLBACK_VIEW_HEIGHT);
+    measure();
+    if (typeof ResizeObserver === 'undefined') return;
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  const [first, last] = windowed ? testingWindow(links.length, scrollTop, viewHeight) : [0, links.length];
+  // A keyboard move to a row outside the window: scroll it into view, then focus it once drawn.
+  const reveal = useCallback((row: number, col: number) => {
+    const el = body.current;
+    pending.current = [row, col];
+    const top = Math.max(0, row * TESTING_ROW_HEIGHT - (el?.clientHeight || FALLBACK_VIEW_HEIGHT) / 2);
+    if (el) el.scrollTop = top;
+    setScrollTop(top);
+  }, []);
+  useLayoutEffect(() => {
+    const want = pending.current;
+    if (!want) return;
+    const target = body.current?.querySelector<HTMLInputElement>(cellSelector(want[0], want[1]));
+    if (!target) return;
+    pending.current = null;
+    target.focus();
+    target.select();
+  });
+  const grid = useMemo(() => ({ count: links.length, reveal }), [links.length, reveal]);
+  const columns = 9;
   return (
     <section className="lwp-panel lwp-schedule lwt-testing" data-panel="testing" aria-label="Testing: readings on site">
       <header className="lwp-panel-head">
@@ -347,7 +402,9 @@ export function TestingView() {
       </header>
       <SessionDefaults />
       <SupplyReadings />
-      <div className="lwp-schedule-body" data-testing-grid>
+      <GridContext.Provider value={grid}>
+      <div className="lwp-schedule-body" data-testing-grid ref={body} data-windowed={windowed ? 'true' : 'false'}
+        onScroll={(e) => setScrollTop(e.currentTarget.scrollTop)}>
         <table className="lwp-schedule-table lwt-table">
           <thead>
             <tr>
@@ -371,9 +428,15 @@ export function TestingView() {
             </tr>
           </thead>
           <tbody>
-            {links.map((l, i) => (
-              <TestingRow key={l.id} id={l.id} row={i} fixedFactor={fixedFactor} />
+            {first > 0 ? (
+              <tr aria-hidden="true" className="lwp-spacer" style={{ height: first * TESTING_ROW_HEIGHT }}><td colSpan={columns} /></tr>
+            ) : null}
+            {links.slice(first, last).map((l, i) => (
+              <TestingRow key={l.id} id={l.id} row={first + i} fixedFactor={fixedFactor} />
             ))}
+            {last < links.length ? (
+              <tr aria-hidden="true" className="lwp-spacer" style={{ height: (links.length - last) * TESTING_ROW_HEIGHT }}><td colSpan={columns} /></tr>
+            ) : null}
           </tbody>
         </table>
         {links.length === 0 ? <p className="lwp-empty">No circuits yet: connect two nodes on the sheet.</p> : null}
@@ -384,6 +447,7 @@ export function TestingView() {
         </p>
         <p className="lwt-caution" data-caution>{CAUTION}</p>
       </div>
+      </GridContext.Provider>
     </section>
   );
 }
