@@ -159,7 +159,8 @@ export function otherFailures(c: CircuitResult, short = false): string[] {
 export function verdictNote(c: CircuitResult, short = false): string | null {
   const others = otherFailures(c, short);
   if (c.verdict === c.status && others.length === 0) return null;
-  const loop = c.status === 'fail' ? ['loop'] : c.status === 'rcd' ? [short ? 'loop (RCD)' : 'loop (relies on the RCD)'] : [];
+  // Short (a diagram label): the loop's status is on the line above, so only the other checks.
+  const loop = short ? [] : c.status === 'fail' ? ['loop'] : c.status === 'rcd' ? ['loop (relies on the RCD)'] : [];
   const reasons = [...loop, ...others];
   return reasons.length > 0 ? `${STATUS_WORD[c.verdict]}: ${reasons.join(', ')}` : STATUS_WORD[c.verdict];
 }
