@@ -29,6 +29,16 @@ export async function build() {
   await viteBuild({ configFile: resolve(here, 'vite.config.ts'), logLevel: 'warn' });
 }
 
+/** The page's own Content-Security-Policy (the meta tag of root/index.html, which vite.config.ts
+ *  fills from app/shared/csp.ts), sent as a header too, with framing refused (a meta policy
+ *  cannot say frame-ancestors). A strict policy when the page has none. */
+export async function headerPolicy(root = dir) {
+  const html = await readFile(join(root, 'index.html'), 'utf8').catch(() => '');
+  const m = /<meta\s+http-equiv=["']Content-Security-Policy["']\s+content="([^"]*)"/i.exec(html);
+  const meta = m ? m[1].replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&amp;/g, '&') : "default-src 'self'; object-src 'none'; base-uri 'none'";
+  return `${meta}; frame-ancestors 'none'`;
+}
+
 /** Serves `root` on host:port; resolves with the server once it listens. */
 export function serve(root = dir, port = 5173, host = '127.0.0.1') {
   const server = createServer(async (req, res) => {
@@ -51,6 +61,8 @@ export function serve(root = dir, port = 5173, host = '127.0.0.1') {
         'content-type': TYPES[extname(file)] ?? 'application/octet-stream',
         'cache-control': 'no-cache',
         'x-content-type-options': 'nosniff',
+        'content-security-policy': await headerPolicy(root),
+        'x-frame-options': 'DENY',
       });
       res.end(req.method === 'HEAD' ? undefined : body);
     } catch (e) {
