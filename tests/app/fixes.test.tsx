@@ -113,6 +113,22 @@ describe('fixes in the details panel', () => {
   });
 });
 
+describe('a failing check with no one-click fix', () => {
+  it('is said plainly in the details panel, with what to change by hand', () => {
+    // C1 passes its loop check; with Ib 10 A, a stated Iz of 16 A below its 20 A breaker fails Ib ≤ In ≤ Iz.
+    const job = sampleJob();
+    load({ ...job, links: job.links.map((l) => (l.id === 'C1' ? { ...l, designCurrent: 10, cable: { ...l.cable, capacity: 16 } } : l)) });
+    expect(result('C1').status).toBe('pass');
+    expect(result('C1').capacityStatus).toBe('fail');
+    expect(result('C1').fixes).toEqual([]);
+    const { container } = showDetails('C1');
+    const manual = container.querySelector('[data-fixes-manual="C1"]')!;
+    expect(manual.textContent).toContain('✗ FAIL: no one-click fix');
+    expect(manual.querySelector('[data-manual-check]')!.textContent).toBe('cable capacity (Ib ≤ In ≤ Iz): a larger cable, or a device rating between Ib and Iz.');
+    expect(container.querySelector('[data-fix]')).toBeNull();
+  });
+});
+
 describe('fixes in the schedule', () => {
   beforeEach(() => load(sampleJob()));
 

@@ -47,10 +47,35 @@ function FixButton({ result, fix, onDone, compact }: { result: CircuitResult; fi
   );
 }
 
+/** What to change by hand for a failing check the engine offers no fix for (method-depth.md §8 covers loop and drop). */
+const MANUAL: ReadonlyArray<{ failing(r: CircuitResult): boolean; check: string; hint: string }> = [
+  { failing: (r) => r.capacityStatus === 'fail', check: 'cable capacity (Ib ≤ In ≤ Iz)', hint: 'a larger cable, or a device rating between Ib and Iz' },
+  { failing: (r) => r.breakingStatus === 'fail', check: 'breaking capacity', hint: 'a device whose breaking capacity covers the fault level at its origin' },
+  { failing: (r) => r.withstandStatus === 'fail', check: 'earth withstand', hint: 'a larger protective conductor, or a device that clears the fault faster' },
+  { failing: (r) => r.measured?.status === 'fail', check: 'measured reading', hint: 'the reading is above its test limit: find the cause on site (connections, the cable run) and test again' },
+];
+
+/** Failing checks with no one-click fix: said plainly, with what to change by hand. */
+function ManualFixes({ r }: { r: CircuitResult }) {
+  const open = MANUAL.filter((m) => m.failing(r));
+  if (open.length === 0) return null;
+  return (
+    <section className="lwf-fixes lwf-fixes-manual" aria-label={`Failing checks of ${r.link} without a one-click fix`} data-fixes-manual={r.link}>
+      <h4><span aria-hidden="true">{STATUS_LOOK.fail.symbol}</span> {STATUS_LOOK.fail.word}: no one-click fix</h4>
+      <ul className="lwf-manual">
+        {open.map((m) => (
+          <li key={m.check} data-manual-check={m.check}><strong>{m.check}</strong>: {m.hint}.</li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
 /** The details panel's list of fixes for one circuit (nothing when it needs none). */
 export function FixList({ linkId }: { linkId: string }) {
   const r = useEditor(selectResult(linkId));
-  if (!r || !needsFix(r)) return null;
+  if (!r) return null;
+  if (!needsFix(r)) return <ManualFixes r={r} />;
   const look = STATUS_LOOK[r.status === 'pass' ? 'fail' : r.status];
   return (
     <section className="lwf-fixes" aria-label={`Fixes for ${linkId}`} data-fixes={linkId}>
@@ -71,8 +96,22 @@ export function FixList({ linkId }: { linkId: string }) {
           </div>
         </>
       )}
+      <ManualList r={r} />
       <p className="lwf-caution">{CAUTION}</p>
     </section>
+  );
+}
+
+/** Inside the list of fixes: the failing checks no fix there addresses. */
+function ManualList({ r }: { r: CircuitResult }) {
+  const open = MANUAL.filter((m) => m.failing(r));
+  if (open.length === 0) return null;
+  return (
+    <ul className="lwf-manual" data-fixes-manual={r.link}>
+      {open.map((m) => (
+        <li key={m.check} data-manual-check={m.check}><strong>{m.check}</strong> also fails, with no one-click fix: {m.hint}.</li>
+      ))}
+    </ul>
   );
 }
 
