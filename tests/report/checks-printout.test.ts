@@ -59,6 +59,24 @@ describe('test sheets', () => {
     expect(both.slice(0, plain.length).map((s) => s.title)).toEqual(plain.map((s) => s.title));
   });
 
+  it('states the fixed-factor method and the supply\'s measured Ze, with the test limits that follow from them', () => {
+    const job = fixture();
+    job.rules = { ...job.rules, measuredRule: 'fixed-factor' };
+    job.nodes = job.nodes.map((n) => (n.kind === 'supply' ? { ...n, measured: { ze: 0.12, date: '2026-11-29', instrument: 'tester T-1 (invented)' } } : n));
+    const results = analyse(job);
+    const sheets = layoutReport(job, results, { testSheet: 'only' });
+    const text = flat(sheets);
+    // The common rule of thumb: a reading must not exceed 80 % of the limit (common practice).
+    expect(text).toContain('Method of correction: fixed factor. A reading passes when it is at most 80 % of the loop budget c·U0/Ia');
+    expect(text).toContain('S1: Zem = 0.120 Ω measured on 2026-11-29 with tester T-1 (invented).');
+    // method-depth.md §7 with F = 1/0.8: C1's limit 0.12 + (1.5333 − 0.12)·0.8 = 1.2507 Ω.
+    const c1 = results.circuits.find((c) => c.link === 'C1');
+    expect(c1?.testLimit ?? NaN).toBeCloseTo(1.2507, 3);
+    for (const c of results.circuits) {
+      if (c.testLimit !== null) expect(sheets.flatMap(texts).map((t) => t.text)).toContain(fmtOhm(c.testLimit));
+    }
+  });
+
   it('report --test-sheet writes a PDF where pdftotext finds each test limit as printed, the readings, the method and the caution', () => {
     const dir = mkdtempSync(join(tmpdir(), 'lw-test-sheet-'));
     const out = join(dir, 'tests.pdf');
