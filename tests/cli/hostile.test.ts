@@ -4,7 +4,7 @@
 // control character reaches the terminal, and every SVG sheet is well-formed XML. Also: the
 // command line reads at most the size limit from a device or a pipe.
 
-import { spawn } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -178,6 +178,16 @@ describe('the command line, run as a user would', () => {
     expect(names.length).toBeGreaterThan(0);
     for (const name of names) expect(wellFormed(readFileSync(join(dir, name), 'utf8')), name).toBeNull();
     expect(readFileSync(join(scratch, 'hostile.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  });
+
+  it.skipIf(spawnSync('pdftotext', ['-v']).error !== undefined)('the PDF holds the names without their control characters', () => {
+    const pdf = join(scratch, 'hostile-text.pdf');
+    expect(cli('report', file, '-o', pdf).status).not.toBe(2);
+    const text = spawnSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' }).stdout;
+    expect(text).toContain('=SUM(A1)');
+    expect(text).toContain('Feed one=main');
+    // Line feeds and the form feed between pages are pdftotext's own.
+    expect(text).not.toMatch(/[\u0000-\u0009\u000b\u000d-\u001f\u007f-\u009f]/);
   });
 
   it('a problem naming a hostile id reaches the terminal without its escape sequence', () => {
