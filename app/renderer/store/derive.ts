@@ -1,7 +1,9 @@
 // Derived state: validation of a candidate job and its results, recomputed once per change.
 import {
-  analyse,
+  createAnalysis,
   formatProblem,
+  reanalyse,
+  type Analysis,
   loadJob as readJob,
   toFileObject,
   type CircuitResult,
@@ -147,11 +149,17 @@ export interface Derived {
  * analyse(job), keeping the previous object for every circuit whose result did not change,
  * so only the labels whose numbers moved re-render.
  */
+let lastAnalysis: Analysis | null = null;
+
 export function derive(job: Job, previous: Record<string, CircuitResult>): Derived {
   let results: Results;
   try {
-    results = analyse(job);
+    // After a length edit only the changed subtree is redone (the engine's reanalyse); any
+    // other change is analysed afresh there.
+    lastAnalysis = !lastAnalysis ? createAnalysis(job) : lastAnalysis.job === job ? lastAnalysis : reanalyse(lastAnalysis, job);
+    results = lastAnalysis.results;
   } catch (e) {
+    lastAnalysis = null;
     return {
       results: { ...EMPTY_RESULTS, basis: job.rules.basis },
       resultById: {},
