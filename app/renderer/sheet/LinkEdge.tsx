@@ -9,7 +9,7 @@ import { useEditor } from '../store/editor.js';
 import { selectLink, selectNode, selectResult } from '../store/selectors.js';
 import { NODE_SIZE } from './parts.js';
 import { BUS_DROP, LABEL_HEIGHT, linkGeometry, LABEL_WIDTH } from './geometry.js';
-import { fitLabel, fitVerdict, labelLines, pickLines, shownVerdict, LABEL_LINE } from './labels.js';
+import { fitLabel, fitVerdict, labelLines, pickLines, shownVerdict, verdictText, CHAR_WIDTH, LABEL_LINE } from './labels.js';
 
 /** The zoom in steps of 0.05, so a label re-renders only when its fit may change. */
 const zoomStep = (s: ReactFlowState) => Math.max(0.05, Math.round(s.transform[2] * 20) / 20);
@@ -41,11 +41,18 @@ function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected
         ? `translate(0, -50%) translate(${g.labelX}px, ${g.labelY}px)`
         : `translate(-50%, -50%) translate(${g.labelX}px, ${g.labelY}px)`;
   const all = labelLines(link, result);
-  const fit = fitLabel(all.length, labelRoom(g.labelPlace, sourceY, targetY), zoom);
+  const room = labelRoom(g.labelPlace, sourceY, targetY);
+  const textWidth = LABEL_WIDTH - 16;
+  // Zoomed in far enough, a long verdict ("design passes, reading fails") takes a second row.
+  const long = verdictText(result);
+  const wrapFit = fitLabel(all.length + 1, room, zoom);
+  const wrap = wrapFit.count === all.length + 1 && long.length > textWidth / (CHAR_WIDTH * wrapFit.font)
+    && long.length <= (2 * textWidth) / (CHAR_WIDTH * wrapFit.font);
+  const fit = wrap ? { count: all.length, font: wrapFit.font } : fitLabel(all.length, room, zoom);
   const lines = pickLines(all, fit.count, result);
   // Zoomed out the device line may be left out: the id then leads the verdict line when it fits.
   const idOnDevice = lines.some((l) => l.key === 'device');
-  const verdictFit = fitVerdict(id, result, fit.font, LABEL_WIDTH - 16, idOnDevice);
+  const verdictFit = wrap ? { withId: false, text: long, font: fit.font } : fitVerdict(id, result, fit.font, textWidth, idOnDevice);
   const name = link.name ? `${link.name}: ` : '';
   const title = `${id} ${name}${all.map((l) => l.text).join('\n')}${result?.notes.length ? `\n${result.notes.join(' ')}` : ''}`;
   return (
@@ -67,7 +74,7 @@ function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected
               <div key={l.key} className="lw-label-device" data-label-line="device"><b>{id}</b> {l.text}</div>
             ) : l.key === 'verdict' ? (
               <div key={l.key} className="lw-label-status" data-label-line="verdict"
-                style={verdictFit.font < fit.font ? { fontSize: `${verdictFit.font.toFixed(2)}px` } : undefined}>
+                style={wrap ? { whiteSpace: 'normal' } : verdictFit.font < fit.font ? { fontSize: `${verdictFit.font.toFixed(2)}px` } : undefined}>
                 {verdictFit.withId ? <b>{id} </b> : null}{verdictFit.text}
               </div>
             ) : (

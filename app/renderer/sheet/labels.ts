@@ -127,7 +127,7 @@ export function verdictText(r: CircuitResult | undefined, short = false): string
   if (!r || shown !== 'fail') return head;
   const failing = failingChecks(r, short);
   const s = checkStatuses(r);
-  if (s.measured === 'fail' && failing.length === 1) return short ? `${head}: reading (design passes)` : `${head}: design passes, reading fails`;
+  if (s.measured === 'fail' && failing.length === 1) return short ? `${head}: reading` : `${head}: design passes, reading fails`;
   return failing.length > 0 ? `${head}: ${failing.join(', ')}` : head;
 }
 
