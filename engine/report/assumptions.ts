@@ -110,7 +110,7 @@ function blocks(job: Job, rules: ResolvedRules, caution: string, results?: Resul
     out.push({ kind: 'row', cells: ['Correction of a measured reading: to fault temperature, F = ρf/ρθ at the stated temperature (20 °C when none)', 'ρθ by temperature', rules.measuredRule.overridden ? `set in this job; ${MEASURED_SOURCE}` : MEASURED_SOURCE] });
   }
 
-  out.push({ kind: 'heading', text: 'Source impedance at each supply' });
+  out.push({ kind: 'heading', text: 'Each supply: source impedance, fault level and headroom' });
   const supplies = job.nodes.filter((n) => n.kind === 'supply');
   if (supplies.length === 0) out.push({ kind: 'para', text: 'The job has no supply: no circuit can be checked.' });
   for (const s of supplies) {
