@@ -2,6 +2,7 @@
 // the user is told how many readings came in; a bad one changes nothing and lists its problems.
 // Readings are invented test data.
 import { beforeEach, describe, expect, it } from 'vitest';
+import { parseJob, serialiseJob } from '../../engine/index.js';
 import { importReadingsFromInput, importReadingsText } from '../../app/renderer/io/readings-import.js';
 import { useUi } from '../../app/renderer/app/ui.js';
 import { getCommand } from '../../app/renderer/commands/registry.js';
@@ -28,6 +29,10 @@ describe('importing readings', () => {
     expect(useEditor.getState().undoLabel).toBe('import 2 readings');
     // The engine judges them: every imported reading has a measured result.
     expect(useEditor.getState().resultById.C1!.measured?.zs).toBe(0.55);
+    // Saved and opened again, the readings are the same.
+    const reopened = parseJob(serialiseJob(useEditor.getState().job));
+    if (!reopened.ok) throw new Error('the saved job does not open');
+    expect(reopened.job.links.map((l) => l.measured)).toEqual(useEditor.getState().job.links.map((l) => l.measured));
     useEditor.getState().undo();
     expect(useEditor.getState().job).toBe(before);
     expect(linkOf('C1').measured).toBeUndefined();
