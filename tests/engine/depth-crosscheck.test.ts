@@ -6,14 +6,26 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyse, formatProblem, loadJob, parseJob } from '../../engine/index.js';
+import type { Results } from '../../engine/index.js';
 import { calculate } from './independent/calc.js';
 import { compare } from './independent/compare.js';
 import { jobV2 } from './independent/jobs.js';
 
+/**
+ * Known disagreements, reported in /tmp/engine-bugs.md and pinned by an `it.fails` below; left
+ * out here so the cross-check keeps guarding everything else.
+ * - a reading on a link that no supply reaches: the engine does not correct it (F = 1).
+ */
+function known(message: string, got: Results): boolean {
+  const m = /^(\w+)\.measured\.corrected:/.exec(message);
+  return m !== null && got.circuits.find((c) => c.link === m[1])?.method === null;
+}
+
 function agree(file: unknown): string[] {
   const loaded = loadJob(file);
   if (!loaded.ok) return [`refused:\n${loaded.problems.map(formatProblem).join('\n')}`];
-  return compare(analyse(loaded.job), calculate(loaded.job));
+  const got = analyse(loaded.job);
+  return compare(got, calculate(loaded.job)).filter((m) => !known(m, got));
 }
 
 describe('the engine agrees with an independent calculator of the contract', () => {
@@ -43,6 +55,25 @@ describe('the engine agrees with an independent calculator of the contract', () 
     expect(compare(analyse(loaded.job), want)).toEqual([]);
     // the comparison is not empty-handed: the demo has checked circuits
     expect(want.circuits.some((c) => c.status !== 'unchecked')).toBe(true);
+  });
+
+  it.fails('a reading on a link that no supply reaches is still corrected: 0.8 Ω at 20 °C on copper gives 1.044 Ω', () => {
+    // method-depth.md §7: corrected = Zem + (Zsm − Zem) · F, F = ρf / ρθ; nothing in it needs a supply
+    // (Zem is 0 when no supply's ze is measured). au-nz Cu: F = 0.0225 / (1/58) = 1.305
+    // (AS/NZS 3000:2018 B5.2.2; IEC 60028, from memory); 0.8 · 1.305 = 1.044 Ω. The engine gives 0.8.
+    const file = {
+      format: 'loopwright.job',
+      version: 2,
+      job: {},
+      rules: { basis: 'au-nz' },
+      nodes: [{ id: 'S1', kind: 'supply', source: { type: 'unknown' } }, { id: 'B1', kind: 'board' }, { id: 'P1', kind: 'point', use: 'other' }],
+      links: [{ id: 'C1', from: 'B1', to: 'P1', cable: { length: 10, material: 'Cu', active: 2.5, earth: 2.5 }, device: { type: 'mcb', curve: 'C', rating: 20 }, measured: { zs: 0.8 } }],
+    };
+    const loaded = loadJob(file);
+    if (!loaded.ok) throw new Error('refused');
+    const c = analyse(loaded.job).circuits[0];
+    expect(c?.measured?.status).toBe('unchecked');
+    expect(Math.abs((c?.measured?.corrected as number) - 1.044)).toBeLessThan(1e-9);
   });
 
   it('the comparison itself notices a changed field (it can fail)', () => {

@@ -482,7 +482,8 @@ export function calculate(job: Job): XResults {
     const path = t.pathOf.get(l.id) as Link[];
     const z = (k: Link) => (k.id === l.id && opts.cable ? loopZ(b, k, opts.cable) : loopZ(b, k));
     const none: Loop = { ia: null, B: null, zs: null, own: null, upstream: null, limit: null, If: null, t: null, ratio: null, maxLength: null, status: 'unchecked' };
-    if (!supply) return { ...none, prot, treq };
+    // no supply reaches the link: nothing of the loop check is given (t_req included)
+    if (!supply) return { ...none, prot, treq: null };
     const ze = sourceZe(b, supply);
     const sigma = path.reduce((a, k) => add(a, z(k)), ZERO);
     const zsC = ze ? add(ze, sigma) : null;
@@ -533,7 +534,8 @@ export function calculate(job: Job): XResults {
       const r = dc.get(k.id) as { ib: number | null; pf: number | null };
       return a + (r.ib === null ? 0 : vdOf(b, k, phases.get(k.id) as Phases, r.ib, r.pf as number));
     }, 0);
-    const vdTotal = vd === null ? null : upTotal + vd;
+    // the total runs from a supply: none when no supply reaches the link
+    const vdTotal = vd === null || !supply ? null : upTotal + vd;
     if (vdTotal !== null) totals.set(l.id, vdTotal);
     const vdLimit = vdLimitOf(b, t, l);
     const voltageStatus: Ck = vdTotal === null || vdLimit === null || !supply ? 'unchecked' : atMost(vdTotal, vdLimit) ? 'pass' : 'fail';

@@ -19,7 +19,9 @@ const USES = ['socket-outlets', 'lighting', 'fixed-equipment', 'motor', 'other']
 export const dec = (lo: number, hi: number, places = 3) =>
   fc.integer({ min: Math.round(lo * 10 ** places), max: Math.round(hi * 10 ** places) }).map((v) => v / 10 ** places);
 
-const opt = <T>(arb: fc.Arbitrary<T>, freq = 2) => fc.option(arb, { nil: undefined, freq });
+/** `arb` with probability `p`, else undefined (the field left out). */
+const opt = <T>(arb: fc.Arbitrary<T>, p = 0.5): fc.Arbitrary<T | undefined> =>
+  fc.oneof({ weight: Math.round((1 - p) * 100), arbitrary: fc.constant(undefined) }, { weight: Math.round(p * 100), arbitrary: arb });
 
 export function clean(o: Record<string, unknown>): Obj {
   return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
@@ -43,7 +45,7 @@ export const deviceV2 = fc
   )
   .chain((d) =>
     fc
-      .record({ breaking: opt(fc.constantFrom(1.5, 3, 6, 10, 25)), letThrough: opt(fc.integer({ min: 1000, max: 2_000_000 })), label: opt(fc.string({ maxLength: 6 }), 4) })
+      .record({ breaking: opt(fc.constantFrom(1.5, 3, 6, 10, 25)), letThrough: opt(fc.integer({ min: 1000, max: 2_000_000 }), 0.3), label: opt(fc.string({ maxLength: 6 }), 0.2) })
       .map((extra) => clean({ ...d, ...extra })),
   );
 
@@ -51,24 +53,24 @@ const sourceV2 = fc.oneof(
   fc.constant({ type: 'unknown' }),
   fc.constant({ type: 'impedance', r: 0, x: 0 }),
   fc.record({ type: fc.constant('impedance'), r: dec(0, 0.5), x: dec(0, 0.5) }),
-  fc.record({ type: fc.constant('fault-current'), current: fc.integer({ min: 200, max: 20000 }), xr: opt(dec(0, 5, 2)) }).map(clean),
+  fc.record({ type: fc.constant('fault-current'), current: fc.integer({ min: 200, max: 20000 }), xr: opt(dec(0, 5, 2), 0.6) }).map(clean),
 );
 
 const rulesV2 = fc
   .record({
     basis: fc.constantFrom('au-nz', 'iec'),
-    voltage: opt(fc.constantFrom(220, 230, 240), 3),
-    voltageFactor: opt(dec(0.9, 1.1, 2), 3),
-    unknownSourceShare: opt(dec(0.5, 0.9, 2), 3),
-    reactance: opt(dec(0, 0.0002, 6), 3),
-    resistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4) }), 4),
-    multiples: opt(fc.record({ C: dec(5, 10, 1) }), 4),
-    voltageDropLimit: opt(dec(2, 8, 1), 3),
-    voltageDropResistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4), Al: dec(0.028, 0.04, 4) }), 4),
-    maxVoltageFactor: opt(dec(1, 1.1, 2), 3),
-    shortCircuitResistivity: opt(fc.record({ Al: dec(0.027, 0.03, 4) }), 4),
-    measuredRule: opt(fc.constantFrom('temperature', 'fixed-factor'), 2),
-    measuredFactor: opt(dec(0.6, 1, 2), 3),
+    voltage: opt(fc.constantFrom(220, 230, 240), 0.2),
+    voltageFactor: opt(dec(0.9, 1.1, 2), 0.2),
+    unknownSourceShare: opt(dec(0.5, 0.9, 2), 0.2),
+    reactance: opt(dec(0, 0.0002, 6), 0.2),
+    resistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4) }), 0.15),
+    multiples: opt(fc.record({ C: dec(5, 10, 1) }), 0.15),
+    voltageDropLimit: opt(dec(2, 8, 1), 0.2),
+    voltageDropResistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4), Al: dec(0.028, 0.04, 4) }), 0.15),
+    maxVoltageFactor: opt(dec(1, 1.1, 2), 0.2),
+    shortCircuitResistivity: opt(fc.record({ Al: dec(0.027, 0.03, 4) }), 0.15),
+    measuredRule: opt(fc.constantFrom('temperature', 'fixed-factor'), 0.4),
+    measuredFactor: opt(dec(0.6, 1, 2), 0.3),
   })
   .map(clean);
 
@@ -76,15 +78,15 @@ export const cableV2 = fc
   .record({
     length: fc.oneof({ weight: 1, arbitrary: fc.constant(0) }, { weight: 12, arbitrary: dec(0.1, 150, 1) }),
     material: fc.constantFrom('Cu', 'Al'),
-    active: fc.constantFrom(...ALL_SIZES),
-    earth: fc.constantFrom(...ALL_SIZES),
-    earthMaterial: opt(fc.constantFrom('Cu', 'Al'), 3),
-    parallel: opt(fc.integer({ min: 1, max: 3 }), 3),
-    reactance: opt(dec(0, 0.0002, 6), 3),
+    active: fc.oneof({ weight: 15, arbitrary: fc.constantFrom(...ALL_SIZES) }, { weight: 1, arbitrary: fc.constantFrom(2, 3, 5) }),
+    earth: fc.oneof({ weight: 15, arbitrary: fc.constantFrom(...ALL_SIZES) }, { weight: 1, arbitrary: fc.constantFrom(2, 3, 5) }),
+    earthMaterial: opt(fc.constantFrom('Cu', 'Al'), 0.25),
+    parallel: opt(fc.integer({ min: 1, max: 3 }), 0.25),
+    reactance: opt(dec(0, 0.0002, 6), 0.2),
     insulation: opt(fc.constantFrom('pvc', 'xlpe')),
-    earthInCable: opt(fc.boolean()),
-    capacity: opt(fc.integer({ min: 5, max: 400 }), 3),
-    derating: opt(dec(0.5, 1, 2), 2),
+    earthInCable: opt(fc.boolean(), 0.4),
+    capacity: opt(fc.integer({ min: 5, max: 400 }), 0.3),
+    derating: opt(dec(0.5, 1, 2), 0.4),
   })
   .map(clean);
 
@@ -148,13 +150,19 @@ export function repairPhases(file: Obj): Obj {
 
 /** A board and a point that no supply reaches (a warning, not an error): unchecked, method null. */
 const orphanArb = fc
-  .record({ cable: cableV2, device: opt(deviceV2, 1), current: opt(dec(1, 30, 1), 1), phases: opt(fc.constantFrom(1, 3), 2) })
-  .map(({ cable, device, current, phases }) => ({
+  .record({
+    cable: cableV2,
+    device: opt(deviceV2, 0.6),
+    current: opt(dec(1, 30, 1), 0.6),
+    phases: opt(fc.constantFrom(1, 3), 0.4),
+    measured: opt(fc.record({ zs: dec(0.02, 3, 3) }), 0.5),
+  })
+  .map(({ cable, device, current, phases, measured }) => ({
     nodes: [
       { id: 'O0', kind: 'board' },
       clean({ id: 'O1', kind: 'point', use: 'other', current, phases }),
     ],
-    links: [clean({ id: 'LO', from: 'O0', to: 'O1', cable, device, phases })],
+    links: [clean({ id: 'LO', from: 'O0', to: 'O1', cable, device, phases, measured })],
   }));
 
 export interface V2Options {
@@ -174,7 +182,7 @@ export function jobV2(opts: V2Options = {}): fc.Arbitrary<Obj> {
           source: opts.source ?? sourceV2,
           phases: opt(fc.constantFrom(1, 3)),
           maxFault: opt(fc.record({ current: fc.integer({ min: 500, max: 30000 }), xr: opt(dec(0, 4, 2)) }).map(clean)),
-          measured: opt(fc.record({ ze: dec(0.05, 0.8, 3), instrument: opt(fc.constant('tester'), 1) }).map(clean), 3),
+          measured: opt(fc.record({ ze: dec(0.05, 0.8, 3), instrument: opt(fc.constant('tester')) }).map(clean), 0.4),
         })
         .map((o) => clean({ id: `S${k}`, kind: 'supply', ...o })),
     );
@@ -184,8 +192,8 @@ export function jobV2(opts: V2Options = {}): fc.Arbitrary<Obj> {
         : fc
             .record({
               use: fc.constantFrom(...USES),
-              handHeld: opt(fc.boolean(), 3),
-              current: fc.option(dec(0, 60, 1), { nil: undefined, freq: 5 }),
+              handHeld: opt(fc.boolean(), 0.3),
+              current: opt(dec(0, 60, 1), 0.75),
               phases: opt(fc.constantFrom(1, 3)),
               powerFactor: opt(dec(0.5, 1, 2)),
             })
@@ -193,23 +201,23 @@ export function jobV2(opts: V2Options = {}): fc.Arbitrary<Obj> {
     );
     const linkArbs = sh.parents.map((p, i) => {
       const fromPoint = p >= 0 && sh.kinds[p] === 'point';
-      const dev = !fromPoint && opts.allDevices ? device : fromPoint ? opt(device, 5) : opt(device, 4);
+      const dev = !fromPoint && opts.allDevices ? device : fromPoint ? opt(device, 0.2) : opt(device, 0.75);
       return fc
         .record({
           cable: cableV2,
           device: dev,
-          rcd: opt(fc.record({ sensitivity: fc.constantFrom(0.01, 0.03, 0.1, 0.3) }), 3),
-          requiredTime: opt(fc.constantFrom(0.2, 0.4, 1, 5), 4),
-          phases: opt(fc.constantFrom(1, 3), 3),
-          designCurrent: opt(dec(0.5, 200, 1), 5),
-          powerFactor: opt(dec(0.5, 1, 2), 5),
-          voltageDropLimit: opt(dec(1, 8, 1), 5),
-          measured: opt(fc.record({ zs: dec(0.02, 3, 3), temperature: opt(fc.integer({ min: -30, max: 60 })) }).map(clean), 2),
+          rcd: opt(fc.record({ sensitivity: fc.constantFrom(0.01, 0.03, 0.1, 0.3) }), 0.3),
+          requiredTime: opt(fc.constantFrom(0.2, 0.4, 1, 5), 0.15),
+          phases: opt(fc.constantFrom(1, 3), 0.25),
+          designCurrent: opt(dec(0.5, 200, 1), 0.15),
+          powerFactor: opt(dec(0.5, 1, 2), 0.15),
+          voltageDropLimit: opt(dec(1, 8, 1), 0.15),
+          measured: opt(fc.record({ zs: dec(0.02, 3, 3), temperature: opt(fc.integer({ min: -30, max: 60 }), 0.6) }).map(clean), 0.4),
         })
         .map((o) => clean({ id: `L${i}`, from: p < 0 ? `S${-1 - p}` : `N${p}`, to: `N${i}`, ...o }));
     });
     return fc
-      .record({ rules: rulesV2, supplies: fc.tuple(...supplyArbs), nodes: fc.tuple(...nodeArbs), links: fc.tuple(...linkArbs), orphan: opt(orphanArb, 4) })
+      .record({ rules: rulesV2, supplies: fc.tuple(...supplyArbs), nodes: fc.tuple(...nodeArbs), links: fc.tuple(...linkArbs), orphan: opt(orphanArb, 0.25) })
       .map(({ rules, supplies, nodes, links, orphan }) =>
         repairPhases(
           structuredClone({
