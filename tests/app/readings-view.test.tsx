@@ -98,6 +98,11 @@ describe('testing view', () => {
     expect(linkOf('C1').measured).toBeUndefined();
     expect(container.querySelector('[data-testing-error="C1:zs"]')!.textContent).toBe('Zs must be greater than 0 Ω, got 0');
     expect(document.activeElement).toBe(cell(container, 'C1', 'zs'));
+    // The last good value is back in the cell; Enter on it moves on and clears the message.
+    expect(cell(container, 'C1', 'zs').value).toBe('');
+    act(() => void fireEvent.keyDown(cell(container, 'C1', 'zs'), { key: 'Enter' }));
+    expect(document.activeElement).toBe(cell(container, 'C2', 'zs'));
+    expect(container.querySelector('[data-testing-error="C1:zs"]')).toBeNull();
     typeAndPress(cell(container, 'C1', 'zs'), '0.7', 'Enter');
     typeAndPress(cell(container, 'C1', 'temperature'), '75', 'Enter');
     expect(container.querySelector('[data-testing-error="C1:temperature"]')!.textContent).toBe('Temperature must be ≤ 60 °C, got 75');

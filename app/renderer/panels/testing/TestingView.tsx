@@ -96,8 +96,13 @@ function Cell({ row, col, link, field, shown, placeholder, draft, commit }: Cell
     tried.current = null;
   }, [shown]);
 
-  const run = (): boolean => {
-    if (text === shown || text === tried.current) return error === null;
+  /** Commits the text; false when refused. A key that moves on from an unchanged cell clears an old refusal. */
+  const run = (moving: boolean): boolean => {
+    if (text === shown) {
+      if (moving && error) setError(null);
+      return true;
+    }
+    if (text === tried.current) return true;
     tried.current = text;
     const outcome = commit(text);
     if (outcome.ok) {
@@ -123,7 +128,7 @@ function Cell({ row, col, link, field, shown, placeholder, draft, commit }: Cell
       setError(null);
       return;
     } else return;
-    const ok = run();
+    const ok = run(true);
     if (!ok) {
       e.preventDefault(); // stay on the refused cell, its reason beside it
       return;
@@ -148,7 +153,7 @@ function Cell({ row, col, link, field, shown, placeholder, draft, commit }: Cell
         value={text}
         placeholder={placeholder}
         onChange={(e) => setText(e.target.value)}
-        onBlur={() => void run()}
+        onBlur={() => void run(false)}
         onKeyDown={onKeyDown}
       />
       {error ? (
