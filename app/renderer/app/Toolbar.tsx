@@ -45,7 +45,7 @@ export function Toolbar() {
         aria-label="Open a job file"
         onChange={(e) => void openFromInput(e.currentTarget)}
       />
-      <div className="lw-doc-title" data-doc-title>
+      <div className="lw-doc-title" data-doc-title title={fileName ?? (title || 'Untitled job')}>
         {fileName ?? (title || 'Untitled job')}
         {dirty && <span className="lw-dirty" title="Unsaved changes"> ● unsaved</span>}
       </div>
