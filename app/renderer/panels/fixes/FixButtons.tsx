@@ -138,8 +138,13 @@ export function FixMenu({ linkId }: { linkId: string }) {
       if (t && (menu.current?.contains(t) || button.current?.contains(t))) return;
       setOpen(false);
     };
+    // The menu is placed by the button's position on screen: a scroll of the schedule closes it.
     window.addEventListener('pointerdown', close, true);
-    return () => window.removeEventListener('pointerdown', close, true);
+    window.addEventListener('scroll', close, true);
+    return () => {
+      window.removeEventListener('pointerdown', close, true);
+      window.removeEventListener('scroll', close, true);
+    };
   }, [open]);
 
   useEffect(() => {
@@ -158,7 +163,6 @@ export function FixMenu({ linkId }: { linkId: string }) {
         type="button"
         className="lwp-button lwf-menu-button"
         data-fix-menu={linkId}
-        aria-haspopup="menu"
         aria-expanded={open}
         aria-controls={open ? menuId : undefined}
         title={`${count} change${count === 1 ? '' : 's'} that make ${linkId} pass`}
@@ -173,7 +177,7 @@ export function FixMenu({ linkId }: { linkId: string }) {
         <div
           ref={menu}
           id={menuId}
-          role="menu"
+          role="group"
           aria-label={`Fixes for ${linkId}`}
           className="lwf-menu"
           data-fix-menu-list={linkId}
