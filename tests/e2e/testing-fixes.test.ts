@@ -60,6 +60,25 @@ describe('one-click fixes', () => {
     await page.waitForFunction((link) => document.querySelector(`[data-results="${link}"] [data-status-badge]`)?.getAttribute('data-status-badge') === 'fail', id);
   });
 
+  it('fixes every demo circuit that has a size fix with one click each; the verdicts are the engine’s for the changed job', async () => {
+    const page = await app.newPage();
+    let job = demo;
+    const fixed = analyse(demo).circuits.filter((c) => c.fixes.some((f) => f.kind === 'size'));
+    expect(fixed.length).toBeGreaterThan(1);
+    for (const c of fixed) {
+      const size = c.fixes.find((f) => f.kind === 'size') as Extract<CircuitResult['fixes'][number], { kind: 'size' }>;
+      job = { ...job, links: job.links.map((l) => (l.id === c.link ? { ...l, cable: { ...l.cable, active: size.active, earth: size.earth } } : l)) };
+      const expected = analyse(job).circuits.find((r) => r.link === c.link)!.verdict;
+      expect(expected).not.toBe(c.verdict); // the click changes what the schedule shows
+      await selectRow(page, c.link);
+      await page.click(`[data-fixes="${c.link}"] [data-fix="size"]`);
+      await page.waitForFunction(
+        ([link, verdict]) => document.querySelector(`[data-schedule-row="${link}"] [data-verdict-cell]`)?.getAttribute('data-verdict-cell') === verdict,
+        [c.link, expected] as const,
+      );
+    }
+  });
+
   it('fixes it from the schedule row’s Fix menu too', async () => {
     const page = await app.newPage();
     const id = failing.link;
