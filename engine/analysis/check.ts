@@ -10,7 +10,7 @@
 
 import type { Device, Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
-import { magnitude, type Complex } from './complex.js';
+import type { Complex } from './complex.js';
 import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripCurrent } from './devices.js';
 import { impedancePerMetre } from './impedance.js';
 import { maxLength } from './max-length.js';
@@ -102,9 +102,10 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   result.method = ze ? 'known-source' : 'unknown-source';
   const c = rules.voltageFactor.value;
   const u0 = rules.voltage.value;
-  const drawn = sums.drawn(to);
+  const drawnRe = sums.nodeRe[to]!;
+  const drawnIm = sums.nodeIm[to]!;
   if (ze) {
-    result.zs = magnitude({ re: ze.re + drawn.re, im: ze.im + drawn.im });
+    result.zs = Math.hypot(ze.re + drawnRe, ze.im + drawnIm);
     if (result.zs > 0) result.faultCurrent = (c * u0) / result.zs;
     else {
       facts.zeroLoop = true;
@@ -117,10 +118,10 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   }
 
   const origin = order.linkFrom[protecting]!;
-  const upstream = sums.drawn(origin);
-  const own = { re: drawn.re - upstream.re, im: drawn.im - upstream.im };
-  result.own = magnitude(own);
-  result.upstream = magnitude(upstream);
+  const upRe = sums.nodeRe[origin]!;
+  const upIm = sums.nodeIm[origin]!;
+  result.own = Math.hypot(drawnRe - upRe, drawnIm - upIm);
+  result.upstream = Math.hypot(upRe, upIm);
   const far = order.nodes[to];
   const tReq = requiredTime(rules.basis, link, order.roles[l]!, far, device);
   result.requiredTime = tReq;
@@ -129,7 +130,8 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
     if (facts.zeroLoop) result.clearingTime = device.type === 'curve' ? device.points[device.points.length - 1]![1] : INSTANTANEOUS_TIME;
     else if (result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, trip.ia);
   }
-  const beforeDrawn = sums.drawn(from);
+  const beforeRe = sums.nodeRe[from]!;
+  const beforeIm = sums.nodeIm[from]!;
   let status: Status;
   if (trip.ia === null) {
     notes.unshift(trip.note);
@@ -142,7 +144,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
     if (ze) {
       result.limit = budget;
       result.ratio = result.zs! / budget;
-      facts.before = { re: ze.re + beforeDrawn.re, im: ze.im + beforeDrawn.im };
+      facts.before = { re: ze.re + beforeRe, im: ze.im + beforeIm };
       result.maxLength = maxLength(facts.before, perMetre, budget);
       status = atMost(result.ratio, 1) ? 'pass' : 'fail';
       if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${result.faultCurrent?.toFixed(0)} A is below the ${ia.toFixed(0)} A needed to disconnect within ${tReq} s`);
@@ -158,7 +160,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
       const upRatio = upLimit > 0 ? result.upstream / upLimit : result.upstream > 0 ? Number.MAX_VALUE : 0;
       result.limit = ownLimit;
       result.ratio = Math.max(ownRatio, upRatio);
-      facts.before = { re: beforeDrawn.re - upstream.re, im: beforeDrawn.im - upstream.im };
+      facts.before = { re: beforeRe - upRe, im: beforeIm - upIm };
       result.maxLength = maxLength(facts.before, perMetre, ownLimit);
       status = atMost(result.ratio, 1) ? 'pass' : 'fail';
       if (!atMost(ownRatio, 1)) notes.push(`the circuit's own loop ${ohms(result.own)} exceeds ${pct(share)} of the loop budget (${ohms(ownLimit)})`);

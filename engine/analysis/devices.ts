@@ -73,7 +73,7 @@ export function clearingTime(device: Device, current: number, ia: number | null)
 }
 
 function amps(value: number): string {
-  return `${Number(value.toPrecision(6))}`;
+  return Number.isInteger(value) && Math.abs(value) < 1e6 ? String(value) : `${Number(value.toPrecision(6))}`;
 }
 
 /** A short mark for the device: its label, or e.g. `C20` for a breaker. */
