@@ -31,9 +31,10 @@ export function ScheduleViewSwitch() {
   return (
     <div className="lwt-switch" role="group" aria-label="Schedule view">
       <button type="button" className={`lwp-button${view === 'design' ? ' lwt-on' : ''}`} aria-pressed={view === 'design'}
-        data-schedule-view="design" onClick={() => choose('design')}>Design</button>
+        data-schedule-view="design" title="The circuit schedule of the design" onClick={() => choose('design')}>Design</button>
       <button type="button" className={`lwp-button${view === 'testing' ? ' lwt-on' : ''}`} aria-pressed={view === 'testing'}
-        data-schedule-view="testing" onClick={() => choose('testing')}>Testing</button>
+        data-schedule-view="testing" title="Enter the readings taken on site, circuit after circuit, against their test limits"
+        onClick={() => choose('testing')}>Testing</button>
     </div>
   );
 }
