@@ -9,7 +9,7 @@ import { applyFix, planFix } from './apply.js';
 import './fixes.css';
 
 const KIND_WORD: Record<Fix['kind'], string> = {
-  length: 'shorter cable',
+  length: 'shorter cable (rounded down to 0.1 m, so it still passes)',
   size: 'larger cable',
   device: 'smaller or faster device',
   rcd: 'add an RCD',
