@@ -56,14 +56,14 @@ describe('circuit schedule', () => {
     expect(await rowIds(page)).toEqual(expectedOrder(ratioOf, 'desc'));
   });
 
-  it('filters by status', async () => {
+  it('filters by verdict', async () => {
     const page = await app.newPage();
-    await page.click('[data-status-filter="fail"]');
-    const failing = results.circuits.filter((c) => c.status === 'fail').map((c) => c.link);
+    await page.click('[data-verdict-filter="fail"]');
+    const failing = results.circuits.filter((c) => c.verdict === 'fail').map((c) => c.link);
     expect(failing.length).toBeGreaterThan(0);
     expect((await rowIds(page)).sort()).toEqual(failing.sort());
-    await expect.poll(() => page.textContent('[data-status-filter="fail"]')).toContain(`(${results.summary.fail})`);
-    await page.click('[data-status-filter="all"]');
+    await expect.poll(() => page.textContent('[data-verdict-filter="fail"]')).toContain(`(${results.summary.verdict.fail})`);
+    await page.click('[data-verdict-filter="all"]');
     expect(await rowIds(page)).toHaveLength(demo.links.length);
   });
 

@@ -110,20 +110,20 @@ describe('circuit schedule', () => {
     expect(asc).toEqual(['C1', 'C3', 'C2', 'M1', 'C4']);
   });
 
-  it('filters by status, with counts', () => {
+  it('filters by verdict (here the loop decides each verdict), with counts', () => {
     const { container } = render(<SchedulePanel />);
-    expect(byHook(container, 'data-status-filter', 'all').textContent).toContain('(5)');
-    expect(byHook(container, 'data-status-filter', 'unchecked').textContent).toContain('(2)');
-    fireEvent.click(byHook(container, 'data-status-filter', 'fail'));
+    expect(byHook(container, 'data-verdict-filter', 'all').textContent).toContain('(5)');
+    expect(byHook(container, 'data-verdict-filter', 'unchecked').textContent).toContain('(2)');
+    fireEvent.click(byHook(container, 'data-verdict-filter', 'fail'));
     expect(rowIds(container)).toEqual(['C2']);
-    fireEvent.click(byHook(container, 'data-status-filter', 'rcd'));
+    fireEvent.click(byHook(container, 'data-verdict-filter', 'rcd'));
     expect(rowIds(container)).toEqual(['C3']);
-    fireEvent.click(byHook(container, 'data-status-filter', 'pass'));
+    fireEvent.click(byHook(container, 'data-verdict-filter', 'pass'));
     expect(rowIds(container)).toEqual(['C1']);
-    fireEvent.click(byHook(container, 'data-status-filter', 'unchecked'));
+    fireEvent.click(byHook(container, 'data-verdict-filter', 'unchecked'));
     expect(rowIds(container)).toEqual(['M1', 'C4']);
-    expect(byHook(container, 'data-status-filter', 'unchecked').getAttribute('aria-pressed')).toBe('true');
-    fireEvent.click(byHook(container, 'data-status-filter', 'all'));
+    expect(byHook(container, 'data-verdict-filter', 'unchecked').getAttribute('aria-pressed')).toBe('true');
+    fireEvent.click(byHook(container, 'data-verdict-filter', 'all'));
     expect(rowIds(container)).toHaveLength(5);
   });
 
@@ -193,7 +193,7 @@ describe('circuit schedule', () => {
     const rendered = rowIds(big.container).length;
     expect(rendered).toBeGreaterThan(10);
     expect(rendered).toBeLessThan(100);
-    expect(byHook(big.container, 'data-status-filter', 'all').textContent).toContain('(2001)');
+    expect(byHook(big.container, 'data-verdict-filter', 'all').textContent).toContain('(2001)');
     // Scrolling to the end brings the last rows in.
     const body = big.container.querySelector('.lwp-schedule-body') as HTMLElement;
     fireEvent.scroll(body, { target: { scrollTop: 2001 * 34 } });

@@ -131,7 +131,7 @@ function DesignSchedule() {
         <div className="lwp-filters" role="group" aria-label="Filter by verdict">
           <span className="lwp-filters-label" aria-hidden="true">Verdict</span>
           {STATUS_FILTERS.map((f) => (
-            <button key={f} type="button" data-verdict-filter={f} data-status-filter={f} aria-pressed={filter === f}
+            <button key={f} type="button" data-verdict-filter={f} aria-pressed={filter === f}
               className={filter === f ? 'lwp-button lwp-filter lwp-filter-on' : 'lwp-button lwp-filter'}
               onClick={() => setFilter(f)}>
               {filterLabel(f)} <span className="lwp-count">({counts[f]})</span>

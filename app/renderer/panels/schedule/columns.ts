@@ -49,7 +49,7 @@ export const COLUMNS: readonly Column[] = [
   { key: 'to', label: 'To', title: 'Node at the far end (id)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.to },
   { key: 'role', label: 'Role', title: 'Consumer mains, submain or final subcircuit', group: 'input', firstDirection: 'asc', sortValue: (x) => r(x)?.role ?? null },
   { key: 'cable', label: 'Cable', unit: 'mm²', title: 'Active / earth conductor size (mm²) and material', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.cable.active },
-  { key: 'length', label: 'Length', unit: 'm', title: 'Route length (m)', group: 'input', firstDirection: 'desc', sortValue: (x) => x.link.cable.length },
+  { key: 'length', label: 'Len.', unit: 'm', title: 'Route length (m)', group: 'input', firstDirection: 'desc', sortValue: (x) => x.link.cable.length },
   { key: 'device', label: 'Device', unit: 'In A', title: 'Protective device and its rated current In (A)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.device?.rating ?? null },
   { key: 'rcd', label: 'RCD', unit: 'mA', title: 'Residual-current device sensitivity (mA)', group: 'input', firstDirection: 'asc', sortValue: (x) => x.link.rcd?.sensitivity ?? null },
   { key: 'loop', label: 'Zs / own', unit: 'Ω', title: 'Zs at the far end (source known), or own loop with the upstream loop below (source unknown)', group: 'result', firstDirection: 'desc', sortValue: (x) => r(x)?.zs ?? r(x)?.own ?? null },
@@ -109,7 +109,7 @@ export const SET_COLUMNS: Record<ColumnSet, readonly ColumnKey[]> = {
 /** Columns that stay in view at the right edge while a wide set scrolls sideways, right-most last. */
 export const PINNED: readonly ColumnKey[] = ['ratio', 'status', 'verdict'];
 /** Their widths (px), from which each pinned column's offset from the right edge follows. */
-export const PINNED_WIDTH: Partial<Record<ColumnKey, number>> = { ratio: 54, status: 96, verdict: 96 };
+export const PINNED_WIDTH: Partial<Record<ColumnKey, number>> = { ratio: 50, status: 96, verdict: 96 };
 
 /** The right offset (px) of each pinned column of a set that ends with pinned columns. */
 export function pinnedOffsets(keys: readonly ColumnKey[]): Partial<Record<ColumnKey, number>> {
