@@ -149,6 +149,24 @@ describe('fixes in the schedule', () => {
   });
 });
 
+describe('the Fix menu by keyboard', () => {
+  beforeEach(() => load(sampleJob()));
+
+  it('opens with the focus on its first fix, and Escape closes it with the focus back on its button', () => {
+    const { container } = render(<SchedulePanel />);
+    const button = container.querySelector<HTMLButtonElement>('[data-fix-menu="C2"]')!;
+    expect(button.getAttribute('aria-expanded')).toBe('false');
+    act(() => fireEvent.click(button));
+    expect(button.getAttribute('aria-expanded')).toBe('true');
+    const first = container.querySelector('[data-fix-menu-list="C2"] [data-fix]');
+    expect(document.activeElement).toBe(first);
+    act(() => void fireEvent.keyDown(first!, { key: 'Escape' }));
+    expect(container.querySelector('[data-fix-menu-list]')).toBeNull();
+    expect(document.activeElement).toBe(button);
+    expect(linkOf('C2').cable.length).toBe(120); // nothing applied
+  });
+});
+
 describe('planning a fix', () => {
   it('rounds a length down to 0.1 m, never up', () => {
     expect(roundDownTenth(68.1454560351603)).toBe(68.1);

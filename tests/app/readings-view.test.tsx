@@ -123,6 +123,22 @@ describe('testing view', () => {
     expect(linkOf('C2').measured).toBeUndefined();
   });
 
+  it('takes the day’s date and instrument from the fields above the table', () => {
+    const { container } = openTesting();
+    const date = container.querySelector<HTMLInputElement>('[data-testing-session="date"]')!;
+    fireEvent.change(date, { target: { value: ' 2026-12-03 ' } });
+    act(() => void fireEvent.blur(date));
+    const temp = container.querySelector<HTMLInputElement>('[data-testing-session="temperature"]')!;
+    fireEvent.change(temp, { target: { value: '99' } });
+    act(() => void fireEvent.blur(temp));
+    expect(container.querySelector('[data-testing-session-error]')!.textContent).toBe('Temperature must be ≤ 60 °C, got 99');
+    fireEvent.change(temp, { target: { value: '11' } });
+    act(() => void fireEvent.blur(temp));
+    expect(container.querySelector('[data-testing-session-error]')).toBeNull();
+    typeAndPress(cell(container, 'C1', 'zs'), '0.5', 'Enter');
+    expect(linkOf('C1').measured).toEqual({ zs: 0.5, temperature: 11, date: '2026-12-03' });
+  });
+
   it('an emptied Zs removes the reading (one undoable edit) and says so', () => {
     const job = sampleJob();
     load({ ...job, links: job.links.map((l) => (l.id === 'C3' ? { ...l, measured: { zs: 1.2, temperature: 15 } } : l)) });

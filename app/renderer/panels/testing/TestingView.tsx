@@ -341,7 +341,7 @@ function SessionDefaults() {
         <input className="lwp-input lwt-session-input" data-testing-session="instrument" defaultValue={session.instrument ?? ''}
           aria-label="Instrument of new readings" onBlur={(e) => set({ instrument: e.currentTarget.value.trim() || undefined })} />
       </label>
-      {error ? <span className="lwp-field-error" role="alert">{error}</span> : null}
+      {error ? <span className="lwp-field-error" role="alert" data-testing-session-error>{error}</span> : null}
     </fieldset>
   );
 }
