@@ -251,7 +251,11 @@ function resultsOf(state: State): Results {
 function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums: Sums, rules: ResolvedRules): void {
   const link = sums.order.links[l]!;
   if (!sums.reached(l)) {
-    if (link.measured) result.measured = { zs: link.measured.zs, corrected: link.measured.zs, ratio: null, status: 'unchecked' };
+    // No supply, so no budget and no measured Ze: the reading is still corrected (Zem = 0).
+    if (link.measured) {
+      const factor = correctionFactor(link.cable.material, readingTemperature(link), rules);
+      result.measured = { zs: link.measured.zs, corrected: correctedReading(link.measured.zs, 0, factor), ratio: null, status: 'unchecked' };
+    }
     return;
   }
   const supply = sums.order.supplyNode(sums.order.linkTo[l]!);
