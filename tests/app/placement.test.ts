@@ -89,3 +89,20 @@ describe('the first view of a job', () => {
     expect(firstView([], box)).toMatchObject({ zoom: 1, whole: true });
   });
 });
+
+describe('the overview map', () => {
+  const sheet = { width: 800, height: 430 };
+  it('takes the top right when nothing is drawn there, else another empty corner, else none', async () => {
+    const { mapCorner, MAP_BOX } = await import('../../app/renderer/sheet/view.js');
+    expect(mapCorner(sheet, [])).toBe('top-right');
+    const topRight = { left: sheet.width - 100, top: 20, right: sheet.width - 40, bottom: 60 };
+    expect(mapCorner(sheet, [topRight])).toBe('top-left');
+    const topLeft = { left: 10, top: 10, right: 200, bottom: 50 };
+    expect(mapCorner(sheet, [topRight, topLeft])).toBe('bottom-right');
+    const bottomRight = { left: sheet.width - 60, top: sheet.height - 60, right: sheet.width - 10, bottom: sheet.height - 20 };
+    expect(mapCorner(sheet, [topRight, topLeft, bottomRight])).toBeNull();
+    // A label just clear of the map's box does not move it.
+    const beside = { left: sheet.width - MAP_BOX.margin - MAP_BOX.width - 20, top: 20, right: sheet.width - MAP_BOX.margin - MAP_BOX.width - 6, bottom: 60 };
+    expect(mapCorner(sheet, [beside])).toBe('top-right');
+  });
+});

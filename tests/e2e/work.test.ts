@@ -43,6 +43,19 @@ async function dropOnBody(page: Page, from: string, to: string) {
   await page.mouse.up();
 }
 
+/** Nodes and link labels the overview map lies over (none when it is left out). */
+async function coveredByMap(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const map = document.querySelector('.react-flow__minimap');
+    if (!map || getComputedStyle(map).display === 'none') return [];
+    const m = map.getBoundingClientRect();
+    return [...document.querySelectorAll('[data-node-id], [data-link-label]')].filter((e) => {
+      const r = e.getBoundingClientRect();
+      return r.width > 0 && r.x < m.right && r.right > m.x && r.y < m.bottom && r.bottom > m.y;
+    }).map((e) => e.getAttribute('data-node-id') ?? e.getAttribute('data-link-label')!);
+  });
+}
+
 describe('connecting', () => {
   it('a cable released on a part body connects; a supply has no input dot; From moves a circuit', async () => {
     const page = await app.newPage();
@@ -197,6 +210,15 @@ describe('a laptop screen, 1280 × 800', () => {
     const bar = (await page.locator('.lw-zoombar').boundingBox())!;
     const sheet = (await page.locator('[data-sheet]').boundingBox())!;
     expect(bar.y).toBeGreaterThanOrEqual(sheet.y + sheet.height - 1);
+    // The overview map covers nothing after Fit, nor after the drawing is panned under its corner.
+    await page.waitForTimeout(400);
+    expect(await coveredByMap(page)).toEqual([]);
+    await page.mouse.move(sheet.x + sheet.width * 0.4, sheet.y + sheet.height * 0.6);
+    await page.mouse.down();
+    await page.mouse.move(sheet.x + sheet.width * 0.75, sheet.y + sheet.height * 0.1, { steps: 8 });
+    await page.mouse.up();
+    await page.waitForTimeout(300);
+    expect(await coveredByMap(page)).toEqual([]);
 
     await page.click('[data-command="view.traceWorst"]');
     await page.waitForSelector('[data-breakdown-box]');

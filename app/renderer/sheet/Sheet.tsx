@@ -1,6 +1,6 @@
 // The sheet: React Flow drawing the job. Nodes and links come from the store; every change the
 // user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
-import { useCallback, useEffect, useMemo, useRef, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
   Background, BackgroundVariant, ConnectionLineType, MiniMap, ReactFlow, getViewportForBounds, useReactFlow, useStore,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
@@ -14,7 +14,7 @@ import { flowList, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
 import { selectSearchable } from '../store/selectors.js';
 import { getSheetHandle, setSheetHandle } from './handle.js';
 import { NODE_SIZE, newPart } from './parts.js';
-import { FIT_PADDING, PART_VIEW_NOTE, firstView, freeWidth } from './view.js';
+import { FIT_PADDING, MAP_BOX, PART_VIEW_NOTE, firstView, freeWidth, mapCorner, type MapCorner } from './view.js';
 import { useUi } from '../app/ui.js';
 
 export const PART_MIME = 'application/x-loopwright-part';
@@ -79,7 +79,7 @@ export function clearPartViewNote(): void {
  * Zoom out, the zoom level, zoom in and Fit, in a bar under the drawing rather than over it, so
  * they never cover a label; and the overview map shown or hidden.
  */
-function ZoomBar({ map, onMap }: { map: boolean; onMap(v: boolean): void }) {
+function ZoomBar({ map, onMap, placed }: { map: boolean; onMap(v: boolean): void; placed: boolean }) {
   const flow = useReactFlow();
   const zoom = useStore((st) => st.transform[2]);
   return (
@@ -89,6 +89,7 @@ function ZoomBar({ map, onMap }: { map: boolean; onMap(v: boolean): void }) {
       <button type="button" data-zoom="in" aria-label="Zoom in" title="Zoom in" onClick={() => void flow.zoomIn({ duration: 150 })}>+</button>
       <button type="button" data-zoom="fit" title="Zoom to Fit (Shift+1)" onClick={() => getSheetHandle()?.fit()}>Fit</button>
       <label className="lw-zoom-map"><input type="checkbox" checked={map} data-zoom="map" onChange={(e) => onMap(e.currentTarget.checked)} /> Overview map</label>
+      {map && !placed && <span className="lw-muted" data-map-note>(left out here: every corner of the sheet has part of the drawing)</span>}
     </div>
   );
 }
@@ -325,6 +326,23 @@ export function Sheet({ onContextMenu }: SheetProps) {
   const large = jobNodes.length > LARGE;
   const map = useUi((u) => u.layout.minimap !== false);
   const setMap = useCallback((v: boolean) => useUi.getState().setLayout({ minimap: v }), []);
+  // The overview map goes to a corner the drawing leaves empty, looked at after every pan or zoom
+  // and every edit, and is left out when there is none: it never covers a node or a label.
+  const [corner, setCorner] = useState<MapCorner | null>('top-right');
+  const placeMap = useCallback(() => {
+    const box = wrapper.current?.getBoundingClientRect();
+    if (!box || box.width <= 0) return;
+    const drawn = [...wrapper.current!.querySelectorAll('[data-node-id], [data-link-label]')].map((e) => {
+      const r = e.getBoundingClientRect();
+      return { left: r.left - box.left, top: r.top - box.top, right: r.right - box.left, bottom: r.bottom - box.top };
+    }).filter((r) => r.right > r.left);
+    setCorner(mapCorner(box, drawn));
+  }, []);
+  useEffect(() => {
+    const frame = requestAnimationFrame(placeMap);
+    return () => cancelAnimationFrame(frame);
+  }, [placeMap, searchable, resultById, documentSeq]);
+  const onMoveEnd = useCallback(() => placeMap(), [placeMap]);
   return (
     <div className="lw-sheet-frame">
     <div className="lw-sheet" ref={wrapper} onFocusCapture={onFocusCapture} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>
@@ -346,16 +364,18 @@ export function Sheet({ onContextMenu }: SheetProps) {
         connectionLineType={ConnectionLineType.Step}
         connectionRadius={28}
         onlyRenderVisibleElements={large}
+        onMoveEnd={onMoveEnd}
+        onNodeDragStop={onMoveEnd}
         minZoom={0.05}
         maxZoom={3}
         proOptions={PRO_OPTIONS}
       >
         <Background variant={BackgroundVariant.Lines} gap={40} color="#e8ecf1" />
         {/* Top right: a tree drawn down from its supply leaves that corner empty, where the bottom right held its widest row. */}
-        {!large && map && <MiniMap position="top-right" pannable zoomable nodeStrokeWidth={2} style={{ width: 150, height: 90 }} />}
+        {!large && map && corner && <MiniMap position={corner} pannable zoomable nodeStrokeWidth={2} style={{ width: MAP_BOX.width, height: MAP_BOX.height }} />}
       </ReactFlow>
     </div>
-    <ZoomBar map={map} onMap={setMap} />
+    <ZoomBar map={map} onMap={setMap} placed={large || corner !== null} />
     </div>
   );
 }

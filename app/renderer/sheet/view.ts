@@ -96,3 +96,32 @@ export function freeWidth(
   const free = drawer.left - sheet.left - 8;
   return free >= MIN_FREE_WIDTH ? Math.min(free, sheet.width) : sheet.width;
 }
+
+/** The overview map's drawn size and its margin from the sheet's corner (px). */
+export const MAP_BOX = { width: 150, height: 90, margin: 15 };
+
+export type MapCorner = 'top-right' | 'top-left' | 'bottom-right';
+
+interface Rect {
+  left: number;
+  top: number;
+  right: number;
+  bottom: number;
+}
+
+/**
+ * The corner of the sheet where the overview map covers no drawn node or label, trying the top
+ * right first (a tree drawn down from its supply leaves it empty); null when every corner is
+ * taken, and the map is then left out rather than laid over the drawing.
+ */
+export function mapCorner(sheet: { width: number; height: number }, drawn: readonly Rect[], order: readonly MapCorner[] = ['top-right', 'top-left', 'bottom-right']): MapCorner | null {
+  const { width, height, margin } = MAP_BOX;
+  for (const corner of order) {
+    const left = corner === 'top-left' ? margin : sheet.width - margin - width;
+    const top = corner === 'bottom-right' ? sheet.height - margin - height : margin;
+    const box = { left: left - 4, top: top - 4, right: left + width + 4, bottom: top + height + 4 };
+    if (left < 0 || top < 0) continue;
+    if (!drawn.some((r) => r.left < box.right && r.right > box.left && r.top < box.bottom && r.bottom > box.top)) return corner;
+  }
+  return null;
+}
