@@ -130,6 +130,13 @@ describe('version 2 fields: each bad value refused with its place', () => {
     ['rules.measuredRule', 'guess', 'rules', 'measuredRule', ['"temperature"', '"fixed-factor"', '"guess"']],
     ['rules.measuredFactor', 0, 'rules', 'measuredFactor', ['> 0', '≤ 1', 'got 0']],
     ['rules.measuredFactor', 1.5, 'rules', 'measuredFactor', ['> 0', '≤ 1', 'got 1.5']],
+    // the records themselves
+    ['nodes.0.maxFault', 5, S1, 'maxFault', ['object', 'got 5']],
+    ['nodes.0.measured', 'x', S1, 'measured', ['object', '"x"']],
+    ['links.1.measured', [], C1, 'measured', ['object', 'got []']],
+    ['links.1.measured', { zs: 0.5, temperature: '20' }, C1, 'measured.temperature', ['"20"']],
+    ['rules.voltageDropResistivity', 5, 'rules', 'voltageDropResistivity', ['object', 'got 5']],
+    ['rules.shortCircuitResistivity', { Fe: 0.1 }, 'rules', 'shortCircuitResistivity.Fe', ['"Cu"', '"Al"']],
   ] as Array<[string, unknown, string, string, string[]]>)('%s = %j', (path, value, where, field, shows) => {
     expectMessage(withValue(path, value), where, field, ...shows);
   });
