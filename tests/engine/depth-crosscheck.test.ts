@@ -47,7 +47,7 @@ describe('the engine agrees with an independent calculator of the contract', () 
     );
   });
 
-  it.each(['assets/demo.lwj', 'assets/demo-unknown-source.lwj', 'tests/fixtures/v1-minimal.lwj'])('on %s', (path) => {
+  it.each(['assets/demo.lwj', 'assets/demo-unknown-source.lwj', 'tests/fixtures/v1-minimal.lwj', 'tests/fixtures/v2-depth.lwj'])('on %s', (path) => {
     const loaded = parseJob(readFileSync(path, 'utf8'));
     expect(loaded.ok).toBe(true);
     if (!loaded.ok) return;
