@@ -420,12 +420,12 @@ export function TestingView() {
                 : 'The largest reading that passes at the temperature of the reading (20 °C when none is given)'}>
                 Test limit <span className="lwp-col-unit">Ω</span>
               </th>
-              <th scope="col">Reading Zs <span className="lwp-col-unit">Ω</span></th>
-              <th scope="col">Temperature <span className="lwp-col-unit">°C</span></th>
+              <th scope="col" title="The loop impedance measured at the far end">Reading Zs <span className="lwp-col-unit">Ω</span></th>
+              <th scope="col" title="Temperature of the conductors at the test (20 °C when empty)">Temp. <span className="lwp-col-unit">°C</span></th>
               <th scope="col">Date</th>
               <th scope="col">Instrument</th>
               <th scope="col" className="lwp-num-head" title="The reading corrected to the conductors at fault temperature">
-                Corrected <span className="lwp-col-unit">Ω</span>
+                Corr. <span className="lwp-col-unit">Ω</span>
               </th>
               <th scope="col" className="lwp-num-head" title="Corrected reading as a share of the loop limit">
                 Ratio <span className="lwp-col-unit">%</span>
