@@ -65,8 +65,8 @@ function checkFixes(file: Obj): void {
         const len = (linkIn(file, c.link).cable as Obj).length as number;
         expect(fix.maxLength).toBeGreaterThan(0);
         expect(fix.maxLength).toBeLessThan(len);
-        // where the unknown-source upstream test fails as well, no length of this link can pass:
-        // left to the worked case below (reported in /tmp/engine-bugs.md)
+        // where the unknown-source upstream test fails as well, the literal rule still lists the
+        // length fix, which mends the own test only: pinned by the worked case below
         if (!upstreamHolds(file, c)) continue;
         const at = circuit(analyseFile(withCable(file, c.link, { length: fix.maxLength })), c.link);
         const justBelow = circuit(analyseFile(withCable(file, c.link, { length: fix.maxLength * (1 - 1e-9) })), c.link);
@@ -152,13 +152,14 @@ describe('fixes that pass', () => {
 });
 
 describe('fixes where the upstream test fails too', () => {
-  // Reported in /tmp/engine-bugs.md. method-depth.md §8: "fixes lists the changes that make it
-  // pass, each with everything else unchanged". Unknown source, au-nz, C20: B = 230 / 150 =
-  // 1.533333 Ω, s · B = 1.226667 Ω, (1 − s) · B = 0.306667 Ω.
+  // method-depth.md §8 lists the length fix "when 0 < maxLength < the link's length"; the lead's
+  // reading (kept here) is that this condition is the whole rule, and "a failure that the upstream
+  // test alone causes has no length fix" follows from it. So where the own and the upstream tests
+  // both fail the length fix is still listed; applied, it mends the own test and leaves the
+  // upstream one failing. Unknown source, au-nz, C20: B = 230 / 150 = 1.533333 Ω,
+  // s · B = 1.226667 Ω, (1 − s) · B = 0.306667 Ω.
   // M1 (no device) 20 m of 2.5 / 2.5 mm²: upstream = 20 · 0.018 = 0.36 Ω (X 0.0032) > 0.306667: fails
-  // C1 80 m: own = 1.44 Ω > 1.226667: fails. The length fix (68.145 m) mends the own test only, so
-  // applied it leaves C1 failing; by the sentence above it should not be listed (the contract's
-  // "a failure that the upstream test alone causes has no length fix" covers only the upstream-only case).
+  // C1 80 m: own = 1.44 Ω > 1.226667: fails; maxLength = 1.226667 / 0.0180007 = 68.145 m
   const file = {
     ...jobFile({
       nodes: [unknownSupply('S1'), { id: 'MSB', kind: 'board' }, point('P1', 'socket-outlets')],
@@ -175,13 +176,15 @@ describe('fixes where the upstream test fails too', () => {
     expect(circuit(analyseFile(withDevice(file, 'C1', 'B', 20)), 'C1').status).toBe('pass');
   });
 
-  it.fails('every listed fix, applied, makes C1 pass (the engine lists a length fix that cannot)', () => {
+  it('the literal rule: the length fix is listed; applied, the own test holds and the upstream test still fails', () => {
     const c = circuit(run(file), 'C1');
-    for (const fix of c.fixes) {
-      if (fix.kind !== 'length') continue;
-      expect(circuit(analyseFile(withCable(file, 'C1', { length: fix.maxLength })), 'C1').status).toBe('pass');
-    }
-    expect(c.fixes.some((f) => f.kind === 'length')).toBe(false);
+    expect(c.fixes.map((f) => f.kind)).toEqual(['length', 'device', 'rcd']);
+    const fix = c.fixes[0] as { kind: 'length'; maxLength: number };
+    expectRel(fix.maxLength, 68.145, 1e-4);
+    const after = circuit(analyseFile(withCable(file, 'C1', { length: fix.maxLength })), 'C1');
+    expect(after.own as number).toBeLessThanOrEqual((after.limit as number) * (1 + 1e-9)); // own ≤ s · B
+    expectRel(after.upstream, 0.3600142, 1e-6); // unchanged: |0.36 + j0.0032|
+    expect(after.status).toBe('fail');
   });
 });
 
