@@ -95,9 +95,14 @@ export function reanalyse(previous: Analysis, job: Job): Analysis {
       if (f >= 0) redo.push(f);
     }
   }
+  const summary = cloneSummary(previous.results.summary);
+  for (const k of redo) count(summary, prev.circuits[k]!, -1);
   for (const k of redo) checkOne(state, k);
-  for (const k of redo) finishOne(state, k);
-  return { job, results: resultsOf(state), state };
+  for (const k of redo) {
+    finishOne(state, k);
+    count(summary, state.circuits[k]!, 1);
+  }
+  return { job, results: resultsOf(state, summary), state };
 }
 
 /** The index of the one link whose cable length alone differs, or −1. */
@@ -213,22 +218,21 @@ function finishOne(state: State, l: number): void {
   result.verdict = verdictOf(result);
 }
 
-function resultsOf(state: State): Results {
+function resultsOf(state: State, summary: Summary = summarise(state.circuits)): Results {
   const { sums, phases, faults, circuits, headroom, rules } = state;
   const order = sums.order;
   const supplies: SupplyResult[] = [];
-  const bySupply = new Map<number, SupplyResult>();
-  order.nodes.forEach((node, n) => {
-    if (node.kind !== 'supply') return;
+  const bySupply: Array<SupplyResult | undefined> = [];
+  for (const n of order.supplies) {
     const imax = faults.imax[n]!;
-    const entry: SupplyResult = { node: node.id, phases: asPhases(phases.supply[n]!), faultLevel: Number.isFinite(imax) ? imax : null, maxZe: null, minFaultCurrent: null, setBy: null };
+    const entry: SupplyResult = { node: order.nodes[n]!.id, phases: asPhases(phases.supply[n]!), faultLevel: Number.isFinite(imax) ? imax : null, maxZe: null, minFaultCurrent: null, setBy: null };
     supplies.push(entry);
-    bySupply.set(n, entry);
-  });
+    bySupply[n] = entry;
+  }
   for (let l = 0; l < headroom.length; l++) {
     const z = headroom[l]!;
     if (Number.isNaN(z)) continue;
-    const entry = bySupply.get(order.supplyOf[order.linkTo[l]!]!);
+    const entry = bySupply[order.supplyOf[order.linkTo[l]!]!];
     if (entry && (entry.maxZe === null || z < entry.maxZe)) {
       entry.maxZe = z;
       entry.setBy = circuits[l]!.link;
@@ -244,7 +248,7 @@ function resultsOf(state: State): Results {
     circuits,
     worst: worstPath(order, circuits),
     supplies,
-    summary: summarise(circuits),
+    summary,
   };
 }
 
@@ -294,14 +298,29 @@ function summarise(circuits: readonly CircuitResult[]): Summary {
     verdict: counts(),
     checks: { voltage: checkCounts(), capacity: checkCounts(), breaking: checkCounts(), withstand: checkCounts(), measured: counts() },
   };
-  for (const c of circuits) {
-    summary[c.status] += 1;
-    summary.verdict[c.verdict] += 1;
-    summary.checks.voltage[c.voltageStatus] += 1;
-    summary.checks.capacity[c.capacityStatus] += 1;
-    summary.checks.breaking[c.breakingStatus] += 1;
-    summary.checks.withstand[c.withstandStatus] += 1;
-    if (c.measured) summary.checks.measured[c.measured.status] += 1;
-  }
+  for (const c of circuits) count(summary, c, 1);
   return summary;
+}
+
+/** Add (by = 1) or take away (by = −1) one circuit's statuses. */
+function count(summary: Summary, c: CircuitResult, by: 1 | -1): void {
+  summary[c.status] += by;
+  summary.verdict[c.verdict] += by;
+  summary.checks.voltage[c.voltageStatus] += by;
+  summary.checks.capacity[c.capacityStatus] += by;
+  summary.checks.breaking[c.breakingStatus] += by;
+  summary.checks.withstand[c.withstandStatus] += by;
+  if (c.measured) summary.checks.measured[c.measured.status] += by;
+}
+
+function cloneSummary(s: Summary): Summary {
+  const { checks } = s;
+  return {
+    pass: s.pass,
+    fail: s.fail,
+    rcd: s.rcd,
+    unchecked: s.unchecked,
+    verdict: { ...s.verdict },
+    checks: { voltage: { ...checks.voltage }, capacity: { ...checks.capacity }, breaking: { ...checks.breaking }, withstand: { ...checks.withstand }, measured: { ...checks.measured } },
+  };
 }

@@ -27,6 +27,8 @@ export class TreeOrder {
   readonly childLinks: Int32Array;
   /** Each link's role. */
   readonly roles: LinkRole[];
+  /** The supply nodes, in file order. */
+  readonly supplies: Int32Array;
   /** Each node's place in `pre` (−1 when outside it) and the size of its subtree there. */
   readonly prePosition: Int32Array;
   readonly subtreeSize: Int32Array;
@@ -84,7 +86,10 @@ export class TreeOrder {
         }
       }
     };
-    for (let n = 0; n < nn; n++) if (nodes[n]!.kind === 'supply') walkFrom(n, n);
+    const supplies: number[] = [];
+    for (let n = 0; n < nn; n++) if (nodes[n]!.kind === 'supply') supplies.push(n);
+    this.supplies = Int32Array.from(supplies);
+    for (const n of supplies) walkFrom(n, n);
     for (let n = 0; n < nn; n++) if (!placed[n] && this.feederOf[n] === -1) walkFrom(n, -1);
     this.pre = pre.slice(0, count);
     this.prePosition = new Int32Array(nn).fill(-1);
