@@ -1,15 +1,16 @@
-// File > Export PDF and File > Print. Both start from the renderer's job text, checked again with
-// parseJob here (the main process trusts nothing it is sent), and use the one printout layout:
-// Export PDF writes jobToPdf's bytes (app/report/pdf.ts); Print lays the same sheets out with
-// layoutReport, turns each into SVG with sheetToSvg and prints them from a hidden window.
+// File > Export PDF, File > Print and File > Print Test Sheets. All start from the renderer's job
+// text, checked again with parseJob here (the main process trusts nothing it is sent), and use the
+// one printout layout: Export PDF writes jobToPdf's bytes (app/report/pdf.ts); Print lays the same
+// sheets out with layoutReport, turns each into SVG with sheetToSvg and prints them from a hidden
+// window; Print Test Sheets does the same with the test sheets alone (layoutReport's
+// `testSheet: 'only'`, the sheets `report --test-sheet` writes), a document to take to site.
 
 import { app, BrowserWindow, dialog } from 'electron';
 import { promises as fs } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { analyse, parseJob, plainText, type Job } from '../../engine/index.js';
-import { layoutReport, sheetToSvg, type ReportOptions } from '../../engine/report/index.js';
+import { analyse, layoutReport, parseJob, plainText, sheetToSvg, type Job, type ReportOptions } from '../../engine/index.js';
 import { jobToPdf } from '../report/pdf.js';
 import { loadReportFonts, type ReportFonts } from '../report/fonts.js';
 import { CSP } from '../shared/csp.js';
@@ -41,8 +42,14 @@ async function reportFonts(): Promise<ReportFonts> {
   return fonts;
 }
 
-export function reportOptions(paper: PaperChoice | undefined): ReportOptions {
-  return paper ? { paper: paper.size, orientation: paper.orientation } : {};
+/** What a print holds: the whole printout, or the test sheets alone. */
+export type PrintPart = 'printout' | 'test-sheets';
+
+export function reportOptions(paper: PaperChoice | undefined, part: PrintPart = 'printout'): ReportOptions {
+  return {
+    ...(paper ? { paper: paper.size, orientation: paper.orientation } : {}),
+    ...(part === 'test-sheets' ? { testSheet: 'only' as const } : {}),
+  };
 }
 
 async function refuse(jw: JobWindow, message: string, detail = ''): Promise<void> {
@@ -84,12 +91,17 @@ async function exportPdf(jw: JobWindow, text: string, paper: PaperChoice | undef
   return { path: target, name: path.basename(target) };
 }
 
-async function print(jw: JobWindow, text: string, paper: PaperChoice | undefined): Promise<boolean> {
+async function print(jw: JobWindow, text: string, paper: PaperChoice | undefined, part: PrintPart): Promise<boolean> {
   const job = await jobFrom(jw, text, 'printed');
   if (!job) return false;
-  const sheets = layoutReport(job, analyse(job), reportOptions(paper));
+  const sheets = layoutReport(job, analyse(job), reportOptions(paper, part));
   const first = sheets[0];
-  if (!first) return false;
+  if (!first) {
+    // A job with no circuit has nothing to test: say so rather than print nothing.
+    if (part === 'test-sheets') await refuse(jw, 'There are no test sheets to print.', 'The job has no circuit yet: add a link from the supply or a board first.');
+    return false;
+  }
+  const title = job.job.title || 'Loopwright job';
   const dir = await fs.mkdtemp(path.join(os.tmpdir(), 'loopwright-print-'));
   const win = new BrowserWindow({
     show: false,
@@ -100,7 +112,7 @@ async function print(jw: JobWindow, text: string, paper: PaperChoice | undefined
     const f = await reportFonts();
     const html = printHtml(
       sheets.map((s) => ({ svg: sheetToSvg(s), widthMm: s.widthMm, heightMm: s.heightMm, title: s.title })),
-      job.job.title || 'Loopwright job',
+      part === 'test-sheets' ? `Test sheets: ${title}` : title,
       CSP,
     );
     await Promise.all([
@@ -139,6 +151,10 @@ export function setupPrint(ctx: AppContext): void {
   });
   handle(CHANNELS.print, async (jw, args) => {
     const { text, paper } = must(checkPrintArgs(args, 'print'));
-    return print(jw, text, paper);
+    return print(jw, text, paper, 'printout');
+  });
+  handle(CHANNELS.printTestSheets, async (jw, args) => {
+    const { text, paper } = must(checkPrintArgs(args, 'printTestSheets'));
+    return print(jw, text, paper, 'test-sheets');
   });
 }

@@ -56,6 +56,8 @@ const api: LoopwrightApi = {
   exportPdf: (text: string, paper?: PaperChoice) =>
     ipcRenderer.invoke(CHANNELS.exportPdf, text, ...(paper ? [paper] : [])) as ReturnType<LoopwrightApi['exportPdf']>,
   print: (text: string, paper?: PaperChoice) => ipcRenderer.invoke(CHANNELS.print, text, ...(paper ? [paper] : [])) as Promise<boolean>,
+  printTestSheets: (text: string, paper?: PaperChoice) =>
+    ipcRenderer.invoke(CHANNELS.printTestSheets, text, ...(paper ? [paper] : [])) as Promise<boolean>,
   setMenu: (items: MenuDescriptor[]) => ipcRenderer.send(CHANNELS.setMenu, items),
   setDirty: (dirty: boolean, title: string) => ipcRenderer.send(CHANNELS.setDirty, dirty, title),
   onCommand(listener) {

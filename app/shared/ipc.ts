@@ -74,6 +74,9 @@ export interface LoopwrightApi {
   exportPdf(text: string, paper?: PaperChoice): Promise<SavedJob | null>;
   /** Prints the printout's sheets through the system print dialog. True when sent to a printer. */
   print(text: string, paper?: PaperChoice): Promise<boolean>;
+  /** Prints the test sheets alone (one per board, as `report --test-sheet` writes them) through the
+   *  system print dialog. True when sent to a printer. */
+  printTestSheets(text: string, paper?: PaperChoice): Promise<boolean>;
   /** Builds the native menu from the registry's commands. Send once at start and again whenever
    *  labels, shortcuts or enabled states change. */
   setMenu(items: MenuDescriptor[]): void;
@@ -99,6 +102,7 @@ export const CHANNELS = {
   saveJob: 'loopwright:save-job', // invoke (text, path, saveAs) → SavedJob | null
   exportPdf: 'loopwright:export-pdf', // invoke (text, paper?) → SavedJob | null
   print: 'loopwright:print', // invoke (text, paper?) → boolean
+  printTestSheets: 'loopwright:print-test-sheets', // invoke (text, paper?) → boolean
   setMenu: 'loopwright:set-menu', // send (items)
   setDirty: 'loopwright:set-dirty', // send (dirty, title)
   closeReply: 'loopwright:close-reply', // send (token, CloseReply | null)

@@ -38,7 +38,7 @@ describe('preload', () => {
     expect(bridge.exposed).toHaveLength(1);
     expect(bridge.exposed[0]?.key).toBe('loopwright');
     expect(Object.keys(api).sort()).toEqual(
-      ['exportPdf', 'onCloseRequest', 'onCommand', 'onOpenFile', 'openJob', 'platform', 'print', 'saveJob', 'setDirty', 'setMenu'].sort(),
+      ['exportPdf', 'onCloseRequest', 'onCommand', 'onOpenFile', 'openJob', 'platform', 'print', 'printTestSheets', 'saveJob', 'setDirty', 'setMenu'].sort(),
     );
     expect(typeof api.platform).toBe('string');
   });

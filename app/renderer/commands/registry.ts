@@ -8,6 +8,7 @@ import type { Command, CommandContext } from './types.js';
 import { addPartEdit, feederFor } from './adding.js';
 import { WORK_COMMANDS } from './work.js';
 import { importReadings } from '../io/readings-import.js';
+import { printTestSheets } from '../io/print.js';
 import { useTestingView } from '../panels/testing/view.js';
 
 export type { Command, CommandContext } from './types.js';
@@ -66,6 +67,10 @@ export const COMMANDS: Command[] = [
     enabled: (_s, env) => env.desktop, run: (ctx) => ctx.exportPdf(),
   },
   { id: 'file.print', label: 'Print…', shortcut: 'Mod+P', group: 'file', toolbar: 'Print', enabled: any, run: (ctx) => ctx.print() },
+  {
+    id: 'file.printTestSheets', label: 'Print Test Sheets…', shortcut: null, group: 'file', toolbar: 'Test sheets',
+    enabled: any, run: () => printTestSheets(),
+  },
   {
     id: 'readings.import', label: 'Import Readings (CSV)…', shortcut: null, group: 'file', toolbar: 'Import readings',
     separatorBefore: true, enabled: any, run: () => importReadings(),
