@@ -105,7 +105,8 @@ describe('files in the browser', () => {
     await typeField(page, 'cable.length', '400');
     await expect.poll(async () => (await statuses(page)).C04).toBe('fail');
     await leaveFields(page);
-    await expect.poll(() => page.evaluate(() => localStorage.getItem('loopwright.autosave.v1') !== null)).toBe(true);
+    // Under this tab's own key (loopwright.autosave.v1.<tab>), so another tab never overwrites it.
+    await expect.poll(() => page.evaluate(() => Object.keys(localStorage).some((k) => k.startsWith('loopwright.autosave.v1.'))), { timeout: 5000 }).toBe(true);
     await page.reload();
     await page.waitForSelector('[data-restore-banner]');
     // The demo opened again (C04 passes) until the user restores.

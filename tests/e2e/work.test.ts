@@ -200,6 +200,30 @@ describe('keyboard', () => {
   });
 });
 
+describe('a link reached from the keyboard', () => {
+  it('is brought into view when Tab reaches it off the sheet', async () => {
+    const page = await app.newPage({ viewport: { width: 1280, height: 800 } });
+    // A link whose far end is off the first view (the demo opens on the top of its tree).
+    const off = await page.evaluate(() => {
+      const sheet = document.querySelector('[data-sheet]')!.getBoundingClientRect();
+      const edge = [...document.querySelectorAll<SVGGElement>('.react-flow__edge[data-id]')].find((e) => {
+        const label = document.querySelector(`[data-link-label="${e.getAttribute('data-id')}"]`);
+        const r = label?.getBoundingClientRect();
+        return !r || r.right < sheet.left || r.left > sheet.right || r.bottom < sheet.top || r.top > sheet.bottom;
+      });
+      return edge?.getAttribute('data-id') ?? null;
+    });
+    expect(off).not.toBeNull();
+    await page.keyboard.press('Shift');
+    await page.evaluate((id) => document.querySelector<SVGGElement>(`.react-flow__edge[data-id="${id}"]`)!.focus(), off);
+    await expect.poll(() => page.evaluate((id) => {
+      const sheet = document.querySelector('[data-sheet]')!.getBoundingClientRect();
+      const r = document.querySelector(`[data-link-label="${id}"]`)?.getBoundingClientRect();
+      return !!r && r.left >= sheet.left && r.right <= sheet.right && r.top >= sheet.top && r.bottom <= sheet.bottom;
+    }, off)).toBe(true);
+  });
+});
+
 describe('a laptop screen, 1280 × 800', () => {
   it('docks the breakdown beside the schedule, folds the side columns, and Fit clears the out-of-view note', async () => {
     const page = await app.newPage({ viewport: { width: 1280, height: 800 } });
