@@ -1,7 +1,6 @@
 // The one command registry. The toolbar, the sheet's context menu, the keyboard and (desktop)
 // the native menu all look commands up here by id.
 import { faultPath, type NodeKind } from '../../../engine/index.js';
-import { freeCentre, newPart } from '../sheet/parts.js';
 import { autoArrange } from '../sheet/arrange.js';
 import { collectSubtree, pasteEdit, type Clip } from './clipboard.js';
 import type { Command, CommandContext } from './types.js';
