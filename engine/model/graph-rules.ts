@@ -15,56 +15,54 @@ function linkSite(problems: Problem[], l: Indexed<Link>): Site {
 }
 
 export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<Link>>, problems: Problem[]): void {
-  // Where each id was first used: a node (index ≥ 0) or a link (−1 − index).
+  // Where each id was first used: a position in `nodes` (≥ 0) or in `links` (−1 − position).
   const seen = new Map<string, number>();
-  const placeOf = (code: number): string => (code >= 0 ? `nodes[${code}] (${nodes.find((n) => n.index === code)!.item.id})` : `links[${-1 - code}] (${links.find((l) => l.index === -1 - code)!.item.id})`);
-  for (const n of nodes) {
+  const placeOf = (code: number): string => {
+    const at = code >= 0 ? nodes[code]! : links[-1 - code]!;
+    return `${code >= 0 ? 'nodes' : 'links'}[${at.index}] (${at.item.id})`;
+  };
+  nodes.forEach((n, i) => {
     const before = seen.get(n.item.id);
     if (before !== undefined) new Site(problems, `nodes[${n.index}] (${n.item.id})`, n.item.id).report('id', `id ${JSON.stringify(n.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
-    else seen.set(n.item.id, n.index);
-  }
-  for (const l of links) {
+    else seen.set(n.item.id, i);
+  });
+  links.forEach((l, i) => {
     const before = seen.get(l.item.id);
     if (before !== undefined) linkSite(problems, l).report('id', `id ${JSON.stringify(l.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
-    else seen.set(l.item.id, -1 - l.index);
-  }
-
-  const nodeById = new Map(nodes.map((n) => [n.item.id, n.item]));
-  const feeder = new Map<string, Indexed<Link>>();
-  for (const l of links) {
-    const site = linkSite(problems, l);
-    const { from, to } = l.item;
-    const fromNode = nodeById.get(from);
-    const toNode = nodeById.get(to);
-    if (!fromNode) site.report('from', `from names ${JSON.stringify(from)}, which is not a node of this job`);
-    if (!toNode) site.report('to', `to names ${JSON.stringify(to)}, which is not a node of this job`);
-    if (from === to) {
-      site.report('to', `a link cannot start and end at the same node ${JSON.stringify(to)}`);
-      continue;
-    }
-    if (toNode?.kind === 'supply') {
-      site.report('to', `to names the supply ${JSON.stringify(to)}; a supply is where the network starts and is fed by no link`);
-      continue;
-    }
-    if (!toNode) continue;
-    const other = feeder.get(to);
-    if (other) {
-      site.report('to', `node ${JSON.stringify(to)} is already fed by link ${JSON.stringify(other.item.id)} (links[${other.index}]); every node is fed by exactly one link`);
-      continue;
-    }
-    feeder.set(to, l);
-  }
-
-  // From here on by position in `nodes`: each node's feeding link and the node above it.
-  const position = new Map<string, number>();
-  nodes.forEach((n, i) => {
-    if (!position.has(n.item.id)) position.set(n.item.id, i);
+    else seen.set(l.item.id, -1 - i);
   });
-  const feederAt: Array<Indexed<Link> | undefined> = nodes.map((n, i) => (position.get(n.item.id) === i ? feeder.get(n.item.id) : undefined));
+  /** The position in `nodes` of the node with this id, or −1. */
+  const nodeAt = (id: string): number => {
+    const code = seen.get(id);
+    return code !== undefined && code >= 0 ? code : -1;
+  };
+
+  // Each node's feeding link and the node above it, by position in `nodes`.
+  const feederAt: Array<Indexed<Link> | undefined> = new Array(nodes.length);
   const above = new Int32Array(nodes.length).fill(-1);
-  feederAt.forEach((f, i) => {
-    if (f) above[i] = position.get(f.item.from) ?? -1;
-  });
+  for (const l of links) {
+    const { from, to } = l.item;
+    const fromAt = nodeAt(from);
+    const toAt = nodeAt(to);
+    if (fromAt < 0) linkSite(problems, l).report('from', `from names ${JSON.stringify(from)}, which is not a node of this job`);
+    if (toAt < 0) linkSite(problems, l).report('to', `to names ${JSON.stringify(to)}, which is not a node of this job`);
+    if (from === to) {
+      linkSite(problems, l).report('to', `a link cannot start and end at the same node ${JSON.stringify(to)}`);
+      continue;
+    }
+    if (toAt < 0) continue;
+    if (nodes[toAt]!.item.kind === 'supply') {
+      linkSite(problems, l).report('to', `to names the supply ${JSON.stringify(to)}; a supply is where the network starts and is fed by no link`);
+      continue;
+    }
+    const other = feederAt[toAt];
+    if (other) {
+      linkSite(problems, l).report('to', `node ${JSON.stringify(to)} is already fed by link ${JSON.stringify(other.item.id)} (links[${other.index}]); every node is fed by exactly one link`);
+      continue;
+    }
+    feederAt[toAt] = l;
+    above[toAt] = fromAt;
+  }
 
   // With at most one feeder per node, a cycle shows as a walk up the feeders that returns to
   // itself. state: 0 new, 1 on the current walk, 2 done; each node is walked once.

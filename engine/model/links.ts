@@ -38,7 +38,7 @@ export function validateLink(value: unknown, index: number, problems: Problem[])
   validateDevice(site, raw);
   validateRcd(site, raw);
   if (id === undefined || from === undefined || to === undefined) return undefined;
-  return { ...raw } as unknown as Link;
+  return raw as unknown as Link; // the parsed object itself: loading never changes it
 }
 
 function validateCable(site: Site, link: Json): void {

@@ -50,7 +50,7 @@ export function validateNode(value: unknown, index: number, problems: Problem[])
     readNumber(site, raw, 'powerFactor', { above: 0, max: 1 });
   }
   if (id === undefined || kind === undefined) return undefined;
-  return { ...raw } as unknown as JobNode;
+  return raw as unknown as JobNode; // the parsed object itself: loading never changes it
 }
 
 function validateSource(site: Site, raw: Json): void {
