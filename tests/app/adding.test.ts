@@ -147,8 +147,8 @@ describe('walking the failing circuits', () => {
   });
 
   it('the status bar names the worst loop and the first failure when they differ', () => {
-    expect(problemsLine({ link: 'W07', ratio: 1.234 }, 'C03')).toBe('worst loop W07 (123 %) · first failure ✗ C03');
-    expect(problemsLine({ link: 'C03', ratio: 1.5 }, 'C03')).toBe('worst loop C03 (150 %)');
+    expect(problemsLine({ link: 'W07', ratio: 1.234 }, 'C03')).toBe('worst loop W07 123 % · first ✗ FAIL C03');
+    expect(problemsLine({ link: 'C03', ratio: 1.5 }, 'C03')).toBe('worst loop C03 150 %');
     expect(problemsLine(null, null)).toBeNull();
   });
 });

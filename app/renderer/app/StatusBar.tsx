@@ -7,8 +7,8 @@ import { firstFailure } from '../commands/work.js';
 /** The worst loop (highest ratio) and, when it is another circuit, the first outright failure. */
 export function problemsLine(worst: { link: string; ratio: number } | null, fail: string | null): string | null {
   const parts: string[] = [];
-  if (worst) parts.push(`worst loop ${worst.link} (${Math.round(worst.ratio * 100)} %)`);
-  if (fail && fail !== worst?.link) parts.push(`first failure ✗ ${fail}`);
+  if (worst) parts.push(`worst loop ${worst.link} ${Math.round(worst.ratio * 100)} %`);
+  if (fail && fail !== worst?.link) parts.push(`first ✗ FAIL ${fail}`);
   return parts.length > 0 ? parts.join(' · ') : null;
 }
 
@@ -17,7 +17,8 @@ export const SHORT_CAUTION = 'Design aid only: verify by testing; local wiring r
 
 export function StatusBar() {
   const message = useEditor((s) => s.message);
-  const summary = useEditor((s) => s.results.summary);
+  // The verdicts (every check together), as the labels and the schedule show them.
+  const summary = useEditor((s) => s.results.summary.verdict);
   const basis = useEditor((s) => s.results.basis);
   const worst = useEditor((s) => s.results.worst);
   const fail = useEditor((s) => firstFailure(s.results));
@@ -27,8 +28,9 @@ export function StatusBar() {
       <span className={`lw-message${message?.kind === 'error' ? ' lw-message--error' : ''}`} role="status" data-message>
         {message ? `${message.kind === 'error' ? '✗ ' : ''}${message.text}` : 'Ready'}
       </span>
-      <span className="lw-summary" data-summary>
-        basis {basis} · <span className="lw-status--pass">✓ {summary.pass} pass</span> ·{' '}
+      <span className="lw-summary" data-summary
+        title={`basis ${basis}: ${summary.pass} pass, ${summary.fail} FAIL, ${summary.rcd} RCD-reliant, ${summary.unchecked} unchecked${problems ? `; ${problems}` : ''}`}>
+        <span className="lw-summary-basis">basis {basis} · </span><span className="lw-status--pass">✓ {summary.pass} pass</span> ·{' '}
         <span className="lw-status--fail">✗ {summary.fail} FAIL</span> ·{' '}
         <span className="lw-status--rcd">⚠ {summary.rcd} RCD</span> ·{' '}
         <span className="lw-status--unchecked">○ {summary.unchecked} unchecked</span>
