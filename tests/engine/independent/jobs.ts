@@ -27,9 +27,11 @@ export function clean(o: Record<string, unknown>): Obj {
   return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
 }
 
+// current rising by a factor 1.5–4 a point, time falling tenfold from 100 s or 3 s (so a 5 s
+// t_req may lie beyond the longest time)
 const curvePoints = fc
-  .tuple(fc.integer({ min: 20, max: 200 }), fc.integer({ min: 2, max: 5 }), fc.integer({ min: 15, max: 40 }))
-  .map(([first, n, step]) => Array.from({ length: n }, (_, i): [number, number] => [first * (step / 10) ** i, 100 / 10 ** i]));
+  .tuple(fc.integer({ min: 20, max: 200 }), fc.integer({ min: 2, max: 5 }), fc.integer({ min: 15, max: 40 }), fc.constantFrom(100, 3))
+  .map(([first, n, step, top]) => Array.from({ length: n }, (_, i): [number, number] => [first * (step / 10) ** i, top / 10 ** i]));
 
 export const deviceV2 = fc
   .oneof(
@@ -63,12 +65,12 @@ const rulesV2 = fc
     voltageFactor: opt(dec(0.9, 1.1, 2), 0.2),
     unknownSourceShare: opt(dec(0.5, 0.9, 2), 0.2),
     reactance: opt(dec(0, 0.0002, 6), 0.2),
-    resistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4) }), 0.15),
-    multiples: opt(fc.record({ C: dec(5, 10, 1) }), 0.15),
+    resistivity: opt(fc.record({ Cu: opt(dec(0.017, 0.025, 4)), Al: opt(dec(0.028, 0.04, 4)) }).map(clean), 0.15),
+    multiples: opt(fc.record({ B: opt(dec(3, 5, 1)), C: opt(dec(5, 10, 1)), D: opt(dec(10, 20, 1)) }).map(clean), 0.15),
     voltageDropLimit: opt(dec(2, 8, 1), 0.2),
-    voltageDropResistivity: opt(fc.record({ Cu: dec(0.017, 0.025, 4), Al: dec(0.028, 0.04, 4) }), 0.15),
+    voltageDropResistivity: opt(fc.record({ Cu: opt(dec(0.017, 0.025, 4)), Al: opt(dec(0.028, 0.04, 4)) }).map(clean), 0.15),
     maxVoltageFactor: opt(dec(1, 1.1, 2), 0.2),
-    shortCircuitResistivity: opt(fc.record({ Al: dec(0.027, 0.03, 4) }), 0.15),
+    shortCircuitResistivity: opt(fc.record({ Cu: opt(dec(0.017, 0.02, 4)), Al: opt(dec(0.027, 0.03, 4)) }).map(clean), 0.15),
     measuredRule: opt(fc.constantFrom('temperature', 'fixed-factor'), 0.4),
     measuredFactor: opt(dec(0.6, 1, 2), 0.3),
   })
