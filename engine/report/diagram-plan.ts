@@ -56,18 +56,27 @@ export function autoPositions(job: Job): Map<string, { x: number; y: number }> {
   }
   const pos = new Map<string, { x: number; y: number }>();
   let slot = 0;
-  const place = (id: string, depth: number): number => {
-    if (pos.has(id)) return pos.get(id)?.x ?? 0;
-    pos.set(id, { x: 0, y: depth * AUTO_DY });
-    const kids = children.get(id) ?? [];
-    let x: number;
-    if (kids.length === 0) x = slot++ * AUTO_DX;
-    else {
-      const xs = kids.map((k) => place(k, depth + 1));
-      x = ((xs[0] ?? 0) + (xs[xs.length - 1] ?? 0)) / 2;
+  // Depth first without recursion (a chain of boards may be tens of thousands deep): a node is
+  // placed when it is left, centred over its first and last child.
+  const place = (root: string, rootDepth: number): void => {
+    if (pos.has(root)) return;
+    const stack: Array<{ id: string; depth: number; kids: string[]; next: number }> = [];
+    const enter = (id: string, depth: number) => {
+      pos.set(id, { x: 0, y: depth * AUTO_DY });
+      stack.push({ id, depth, kids: (children.get(id) ?? []).filter((k) => !pos.has(k)), next: 0 });
+    };
+    enter(root, rootDepth);
+    while (stack.length) {
+      const top = stack[stack.length - 1]!;
+      if (top.next < top.kids.length) {
+        const kid = top.kids[top.next++]!;
+        if (!pos.has(kid)) enter(kid, top.depth + 1);
+        continue;
+      }
+      stack.pop();
+      const x = top.kids.length === 0 ? slot++ * AUTO_DX : ((pos.get(top.kids[0]!)?.x ?? 0) + (pos.get(top.kids[top.kids.length - 1]!)?.x ?? 0)) / 2;
+      pos.set(top.id, { x, y: top.depth * AUTO_DY });
     }
-    pos.set(id, { x, y: depth * AUTO_DY });
-    return x;
   };
   for (const n of job.nodes) if (!fed.has(n.id)) place(n.id, 0);
   for (const n of job.nodes) if (!pos.has(n.id)) place(n.id, 0); // safety: a loop cannot load
@@ -79,11 +88,18 @@ function overlapFloor(points: Array<{ x: number; y: number }>): number {
   const W = BLOCK.right - BLOCK.left + PAD;
   const H = BUS - BLOCK.top + PAD;
   let floor = 0;
-  const sorted = [...points].sort((a, b) => a.x - b.x);
+  const sorted = [...points].sort((a, b) => a.x - b.x || a.y - b.y);
+  // Points with the same x follow each other, sorted by y: within such a run only the next
+  // point can set the floor (the nearest in y), so the rest of the run is skipped (a long chain
+  // of boards drawn in one column stays linear).
+  const runEnd = new Int32Array(sorted.length);
+  for (let i = sorted.length - 1; i >= 0; i--) runEnd[i] = i + 1 < sorted.length && sorted[i + 1]!.x === sorted[i]!.x ? runEnd[i + 1]! : i + 1;
   for (let i = 0; i < sorted.length; i++) {
     const a = sorted[i];
     if (a === undefined) continue;
     for (let j = i + 1; j < sorted.length; j++) {
+      if (j > i + 1 && j < runEnd[i]!) j = runEnd[i]!;
+      if (j >= sorted.length) break;
       const b = sorted[j];
       if (b === undefined) continue;
       const dx = b.x - a.x;
@@ -103,10 +119,16 @@ export function planDiagram(job: Job, area: Box): DiagramPlan {
   const raw = auto ? autoPositions(job) : new Map(job.nodes.map((n) => [n.id, n.at ?? { x: 0, y: 0 }]));
   const points = [...raw.values()];
   if (points.length === 0) return { scale: 1, auto, pos: new Map(), tiles: [], tileOf: new Map(), area };
-  const minX = Math.min(...points.map((p) => p.x));
-  const maxX = Math.max(...points.map((p) => p.x));
-  const minY = Math.min(...points.map((p) => p.y));
-  const maxY = Math.max(...points.map((p) => p.y));
+  let minX = Infinity;
+  let maxX = -Infinity;
+  let minY = Infinity;
+  let maxY = -Infinity;
+  for (const p of points) {
+    minX = Math.min(minX, p.x);
+    maxX = Math.max(maxX, p.x);
+    minY = Math.min(minY, p.y);
+    maxY = Math.max(maxY, p.y);
+  }
   const spanX = maxX - minX;
   const spanY = maxY - minY;
   const cellW = area.w - (BLOCK.right - BLOCK.left) - 2 * PAD;

@@ -127,7 +127,9 @@ export function buildSections(job: Job, area: Box, inline: boolean): Section[] |
     return { nodes: list, slots, levels };
   };
 
-  const section = (root: string, fedBy: Link | null, join = inline): boolean => {
+  type Made = { made: Section; stubs: Array<{ root: string; fedBy: Link | null }> };
+  /** One section from `root`: false when it cannot fit, 'apart' when its spine must be split. */
+  const one = (root: string, fedBy: Link | null, join: boolean): Made | false | 'apart' => {
     const spine: Array<{ id: string; link: Link | null }> = [{ id: root, link: null }];
     let end = root;
     for (;;) {
@@ -151,10 +153,23 @@ export function buildSections(job: Job, area: Box, inline: boolean): Section[] |
     }
     const { rows, rowH } = made;
     // A spine so long that its head and first row no longer fit a sheet: each board on its own.
-    if (join && spine.length > 1 && headHeight(made, true) + (rowH[0] ?? 0) > area.h) return section(root, fedBy, false);
-    sections.push(made);
-    for (const r of rows) {
-      for (const c of r) for (const n of c.nodes) if (n.stub && !section(n.id, n.link)) return false;
+    if (join && spine.length > 1 && headHeight(made, true) + (rowH[0] ?? 0) > area.h) return 'apart';
+    const stubs: Made['stubs'] = [];
+    for (const r of rows) for (const c of r) for (const n of c.nodes) if (n.stub) stubs.push({ root: n.id, fedBy: n.link });
+    return { made, stubs };
+  };
+
+  // Sections in reading order (each followed by the sections its stubs continue on), without
+  // recursion: a chain of boards may be tens of thousands deep.
+  const section = (root: string, fedBy: Link | null): boolean => {
+    const stack = [{ root, fedBy }];
+    while (stack.length) {
+      const next = stack.pop()!;
+      let r = one(next.root, next.fedBy, inline);
+      if (r === 'apart') r = one(next.root, next.fedBy, false);
+      if (r === false || r === 'apart') return false;
+      sections.push(r.made);
+      for (let i = r.stubs.length - 1; i >= 0; i--) stack.push(r.stubs[i]!);
     }
     return true;
   };
