@@ -116,8 +116,10 @@ describe('loads, drops and the verdict in the browser', () => {
     const out = await sizes();
     for (const s of out) expect(s.px, s.id).toBeGreaterThanOrEqual(8.9);
     expect(await labelsOverParts(page)).toEqual([]);
-    for (let i = 0; i < 10; i++) await page.click('[data-zoom="in"]');
-    await page.waitForTimeout(400);
+    // Up to the largest zoom, whatever zoom the first view opened at.
+    for (let i = 0; i < 16; i++) await page.click('[data-zoom="in"]');
+    // The zoom animates: wait until the labels have settled at the new zoom (up to 10 s).
+    await page.waitForFunction(() => document.querySelector('[data-link-label="C2"]')?.getAttribute('data-label-lines') === '5', null, { timeout: 10_000 }).catch(() => undefined);
     const zoomedIn = await sizes();
     // Every link is drawn on a job this small, in view or not.
     const c2 = zoomedIn.find((s) => s.id === 'C2')!;
