@@ -7,12 +7,13 @@
 
 import type { Job, PointNode, SupplyNode } from '../model/types.js';
 import { resolveRules, type ResolvedRules } from './basis.js';
-import { checkCapacity } from './capacity.js';
+import { applyCapacity } from './capacity.js';
 import { blankResult, checkLoop, type LoopFacts } from './check.js';
 import { loadTable, type LoadTable } from './design-current.js';
 import { faultTable, faultTableWithLink, type FaultTable } from './fault-level.js';
 import { findFixes } from './fixes.js';
-import { largestSource, sourcePhasor } from './headroom.js';
+import { largestSourceOf, sourcePhasor } from './headroom.js';
+import type { Complex } from './complex.js';
 import { correctedReading, correctionFactor, readingTemperature, testLimit } from './measured.js';
 import { phaseTable, asPhases, type PhaseTable } from './phases.js';
 import type { CircuitResult, CheckStatus, Results, Status, SupplyResult, Summary } from './results.js';
@@ -44,6 +45,8 @@ interface State {
   circuits: CircuitResult[];
   /** The largest source impedance each checked link tolerates (NaN when it does not count). */
   headroom: Float64Array;
+  /** Each supply's source phasor, by node index (filled as needed). */
+  phasors: Array<Complex | undefined>;
 }
 
 export function analyse(job: Job): Results {
@@ -58,7 +61,7 @@ export function createAnalysis(job: Job): Analysis {
   const loads = loadTable(order, phases);
   const drops = dropTable(order, phases, loads, rules);
   const faults = faultTable(order, phases, rules);
-  const state: State = { rules, sums, phases, loads, drops, faults, facts: [], circuits: [], headroom: new Float64Array(job.links.length).fill(NaN) };
+  const state: State = { rules, sums, phases, loads, drops, faults, facts: new Array<LoopFacts>(job.links.length), circuits: new Array<CircuitResult>(job.links.length), headroom: new Float64Array(job.links.length).fill(NaN), phasors: [] };
   for (let l = 0; l < job.links.length; l++) checkOne(state, l);
   // Fixes need the protecting link's design current, known only now.
   for (let l = 0; l < job.links.length; l++) finishOne(state, l);
@@ -163,10 +166,9 @@ function checkOne(state: State, l: number): void {
 
   // Capacity: Ib ≤ In ≤ Iz.
   const rating = loop.device ? loop.device.rating : null;
-  const capacity = checkCapacity(link, result.phases, result.designCurrent, rating, rules);
+  const capacity = applyCapacity(link, result.phases, result.designCurrent, rating, rules, notes);
   result.capacity = capacity.iz;
   result.capacityStatus = capacity.status;
-  notes.push(...capacity.notes);
 
   // Fault level at the origin and the breaking capacity of the link's own device.
   if (reached && from >= 0) {
@@ -186,7 +188,7 @@ function checkOne(state: State, l: number): void {
   const withstand = checkWithstand(link, loop.device, loop.ze !== null, result.faultCurrent, loop.zeroLoop, result.clearingTime);
   result.earthMinArea = withstand.earthMinArea;
   result.withstandStatus = withstand.status;
-  notes.push(...withstand.notes);
+  if (withstand.notes.length > 0) notes.push(...withstand.notes);
 
   // Measured reading and the test limit.
   measuredResult(result, loop, l, sums, rules);
@@ -194,9 +196,18 @@ function checkOne(state: State, l: number): void {
   // What this link allows of the source (source headroom).
   state.headroom[l] = NaN;
   if (loop.budget !== null && reached) {
-    const supply = order.nodes[order.supplyOf[to]!] as SupplyNode;
-    state.headroom[l] = largestSource(sourcePhasor(supply.source), sums.drawn(to), loop.budget);
+    state.headroom[l] = largestSourceOf(phasorOf(state, order.supplyOf[to]!), sums.nodeRe[to]!, sums.nodeIm[to]!, loop.budget);
   }
+}
+
+/** The unit phasor of supply node s's source, worked out once per supply. */
+function phasorOf(state: State, s: number): Complex {
+  let u = state.phasors[s];
+  if (u === undefined) {
+    u = sourcePhasor((state.sums.order.nodes[s] as SupplyNode).source);
+    state.phasors[s] = u;
+  }
+  return u;
 }
 
 /** The fixes and the verdict of link l, once every link's design current is known. */
@@ -204,6 +215,12 @@ function finishOne(state: State, l: number): void {
   const { sums, circuits, facts, rules } = state;
   const link = sums.order.links[l]!;
   const result = circuits[l]!;
+  const needsFixes = result.status === 'fail' || result.status === 'rcd' || result.voltageStatus === 'fail';
+  if (!needsFixes) {
+    result.fixes = [];
+    result.verdict = verdictOf(result);
+    return;
+  }
   const p = facts[l]!.protecting;
   result.fixes = findFixes({
     link,
@@ -264,9 +281,10 @@ function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums:
   }
   const supply = sums.order.supplyNode(sums.order.linkTo[l]!);
   const zem = supply?.measured?.ze ?? 0;
+  const reading = link.measured;
+  if (!reading && loop.budget === null) return;
   const factor = correctionFactor(link.cable.material, readingTemperature(link), rules);
   if (loop.budget !== null) result.testLimit = testLimit(loop.budget, zem, factor);
-  const reading = link.measured;
   if (!reading) return;
   const corrected = correctedReading(reading.zs, zem, factor);
   if (loop.budget === null || !loop.device) {
@@ -284,8 +302,8 @@ function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums:
 }
 
 function verdictOf(c: CircuitResult): Status {
-  const checks: CheckStatus[] = [c.voltageStatus, c.capacityStatus, c.breakingStatus, c.withstandStatus];
-  if (c.status === 'fail' || c.measured?.status === 'fail' || checks.includes('fail')) return 'fail';
+  const anyFails = c.voltageStatus === 'fail' || c.capacityStatus === 'fail' || c.breakingStatus === 'fail' || c.withstandStatus === 'fail';
+  if (c.status === 'fail' || c.measured?.status === 'fail' || anyFails) return 'fail';
   if (c.status === 'rcd' || c.measured?.status === 'rcd') return 'rcd';
   return c.status === 'pass' ? 'pass' : 'unchecked';
 }
@@ -298,7 +316,7 @@ function summarise(circuits: readonly CircuitResult[]): Summary {
     verdict: counts(),
     checks: { voltage: checkCounts(), capacity: checkCounts(), breaking: checkCounts(), withstand: checkCounts(), measured: counts() },
   };
-  for (const c of circuits) count(summary, c, 1);
+  for (let i = 0; i < circuits.length; i++) count(summary, circuits[i]!, 1);
   return summary;
 }
 

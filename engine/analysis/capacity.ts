@@ -33,9 +33,24 @@ export function cableCapacity(link: Link, phases: number, rules: ResolvedRules):
 
 /** Ib ≤ In ≤ Iz, or Ib ≤ Iz alone for a link without a protecting device. */
 export function checkCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules): CapacityResult {
-  const { iz, note } = cableCapacity(link, phases, rules);
-  const notes = note ? [note] : [];
-  if (ib === null || iz === null) return { iz, status: 'unchecked', notes };
+  const notes: string[] = [];
+  const status = applyCapacity(link, phases, ib, rating, rules, notes);
+  return { iz: status.iz, status: status.status, notes };
+}
+
+/** The capacity check with its notes added to `notes`: what the analysis calls for each link
+ *  (no objects made for a link that passes or is not checked). */
+export function applyCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules, notes: string[]): { iz: number | null; status: CheckStatus } {
+  const cable = link.cable;
+  let iz: number | null;
+  if (cable.capacity !== undefined) iz = cable.capacity;
+  else if (rules.basis !== 'iec') iz = null;
+  else {
+    const found = cableCapacity(link, phases, rules);
+    iz = found.iz;
+    if (found.note) notes.push(found.note);
+  }
+  if (ib === null || iz === null) return iz === null ? UNCHECKED_NO_IZ : { iz, status: 'unchecked' };
   let ok = true;
   if (rating !== null) {
     if (!atMost(ib, rating)) {
@@ -50,5 +65,7 @@ export function checkCapacity(link: Link, phases: number, ib: number | null, rat
     ok = false;
     notes.push(`capacity: Ib ≤ Iz fails: the design current ${amps(ib)} exceeds the cable's capacity ${amps(iz)}`);
   }
-  return { iz, status: ok ? 'pass' : 'fail', notes };
+  return { iz, status: ok ? 'pass' : 'fail' };
 }
+
+const UNCHECKED_NO_IZ: { iz: number | null; status: CheckStatus } = Object.freeze({ iz: null, status: 'unchecked' });

@@ -10,8 +10,8 @@
 
 import type { Device, Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
-import type { Complex } from './complex.js';
-import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripCurrent } from './devices.js';
+import { abs, type Complex } from './complex.js';
+import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripAmps, tripCurrent } from './devices.js';
 import { impedancePerMetre } from './impedance.js';
 import { maxLength } from './max-length.js';
 import { requiredTime } from './required-time.js';
@@ -38,46 +38,71 @@ export interface LoopFacts {
   zeroLoop: boolean;
 }
 
+/** LoopFacts built by a constructor, like CircuitRecord: the analysis keeps one per link. */
+class Facts implements LoopFacts {
+  ze: Complex | null = null;
+  budget: number | null = null;
+  before: Complex | null = null;
+  zeroLoop = false;
+  constructor(
+    readonly protecting: number,
+    readonly device: Device | null,
+    readonly perMetre: Complex,
+  ) {}
+}
+
+/** A circuit's results before any check (built by a constructor: see blankResult). */
+class CircuitRecord implements CircuitResult {
+  link: string;
+  name: string | null;
+  from: string;
+  to: string;
+  role: CircuitResult['role'];
+  method: CircuitResult['method'] = null;
+  protectedBy: string | null = null;
+  device: string | null = null;
+  tripCurrent: number | null = null;
+  requiredTime: number | null = null;
+  zs: number | null = null;
+  own: number | null = null;
+  upstream: number | null = null;
+  limit: number | null = null;
+  faultCurrent: number | null = null;
+  clearingTime: number | null = null;
+  ratio: number | null = null;
+  maxLength: number | null = null;
+  status: CircuitResult['status'] = 'unchecked';
+  notes: string[];
+  phases: CircuitResult['phases'] = 1;
+  designCurrent: number | null = null;
+  powerFactor: number | null = null;
+  voltageDrop: number | null = null;
+  voltageDropTotal: number | null = null;
+  voltageDropLimit: number | null = null;
+  voltageStatus: CircuitResult['voltageStatus'] = 'unchecked';
+  capacity: number | null = null;
+  capacityStatus: CircuitResult['capacityStatus'] = 'unchecked';
+  faultLevel: number | null = null;
+  breakingStatus: CircuitResult['breakingStatus'] = 'unchecked';
+  earthMinArea: number | null = null;
+  withstandStatus: CircuitResult['withstandStatus'] = 'unchecked';
+  testLimit: number | null = null;
+  measured: CircuitResult['measured'] = null;
+  fixes: CircuitResult['fixes'] = [];
+  verdict: CircuitResult['verdict'] = 'unchecked';
+
+  constructor(link: Link, role: CircuitResult['role']) {
+    this.link = link.id;
+    this.name = link.name ?? null;
+    this.from = link.from;
+    this.to = link.to;
+    this.role = role;
+    this.notes = sizeNotes(link.cable);
+  }
+}
+
 export function blankResult(link: Link, role: CircuitResult['role']): CircuitResult {
-  return {
-    link: link.id,
-    name: link.name ?? null,
-    from: link.from,
-    to: link.to,
-    role,
-    method: null,
-    protectedBy: null,
-    device: null,
-    tripCurrent: null,
-    requiredTime: null,
-    zs: null,
-    own: null,
-    upstream: null,
-    limit: null,
-    faultCurrent: null,
-    clearingTime: null,
-    ratio: null,
-    maxLength: null,
-    status: 'unchecked',
-    notes: sizeNotes(link.cable),
-    phases: 1,
-    designCurrent: null,
-    powerFactor: null,
-    voltageDrop: null,
-    voltageDropTotal: null,
-    voltageDropLimit: null,
-    voltageStatus: 'unchecked',
-    capacity: null,
-    capacityStatus: 'unchecked',
-    faultLevel: null,
-    breakingStatus: 'unchecked',
-    earthMinArea: null,
-    withstandStatus: 'unchecked',
-    testLimit: null,
-    measured: null,
-    fixes: [],
-    verdict: 'unchecked',
-  };
+  return new CircuitRecord(link, role);
 }
 
 export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFacts {
@@ -89,7 +114,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   result.protectedBy = protecting >= 0 ? order.links[protecting]!.id : null;
   result.device = device ? deviceMark(device) : null;
   const perMetre = impedancePerMetre(link.cable, rules);
-  const facts: LoopFacts = { protecting, device, ze: null, budget: null, before: null, perMetre, zeroLoop: false };
+  const facts: LoopFacts = new Facts(protecting, device, perMetre);
 
   const to = order.linkTo[l]!;
   const from = order.linkFrom[l]!;
@@ -105,7 +130,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   const drawnRe = sums.nodeRe[to]!;
   const drawnIm = sums.nodeIm[to]!;
   if (ze) {
-    result.zs = Math.hypot(ze.re + drawnRe, ze.im + drawnIm);
+    result.zs = abs(ze.re + drawnRe, ze.im + drawnIm);
     if (result.zs > 0) result.faultCurrent = (c * u0) / result.zs;
     else {
       facts.zeroLoop = true;
@@ -120,24 +145,24 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   const origin = order.linkFrom[protecting]!;
   const upRe = sums.nodeRe[origin]!;
   const upIm = sums.nodeIm[origin]!;
-  result.own = Math.hypot(drawnRe - upRe, drawnIm - upIm);
-  result.upstream = Math.hypot(upRe, upIm);
+  result.own = abs(drawnRe - upRe, drawnIm - upIm);
+  result.upstream = abs(upRe, upIm);
   const far = order.nodes[to];
   const tReq = requiredTime(rules.basis, link, order.roles[l]!, far, device);
   result.requiredTime = tReq;
-  const trip = tripCurrent(device, tReq, rules);
+  const amps = tripAmps(device, tReq, rules);
+  const ia = Number.isNaN(amps) ? null : amps;
   if (ze) {
     if (facts.zeroLoop) result.clearingTime = device.type === 'curve' ? device.points[device.points.length - 1]![1] : INSTANTANEOUS_TIME;
-    else if (result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, trip.ia);
+    else if (result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, ia);
   }
   const beforeRe = sums.nodeRe[from]!;
   const beforeIm = sums.nodeIm[from]!;
   let status: Status;
-  if (trip.ia === null) {
-    notes.unshift(trip.note);
+  if (ia === null) {
+    notes.unshift(tripCurrent(device, tReq, rules).note ?? 'the trip current is unknown');
     status = 'fail';
   } else {
-    const ia = trip.ia;
     const budget = (c * u0) / ia;
     facts.budget = budget;
     result.tripCurrent = ia;

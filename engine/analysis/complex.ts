@@ -21,7 +21,14 @@ export function scale(a: Complex, k: number): Complex {
 }
 
 export function magnitude(a: Complex): number {
-  return Math.hypot(a.re, a.im);
+  return abs(a.re, a.im);
+}
+
+/** |re + j·im|: the square root of the sum of squares, which is much quicker than Math.hypot,
+ *  falling back to Math.hypot where the squares would overflow or underflow. */
+export function abs(re: number, im: number): number {
+  const m = Math.sqrt(re * re + im * im);
+  return m < 1e150 && m > 1e-150 ? m : Math.hypot(re, im);
 }
 
 export function sum(values: readonly Complex[]): Complex {

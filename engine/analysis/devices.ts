@@ -28,6 +28,22 @@ export function tripCurrent(device: Device, requiredTime: number, rules: Resolve
   }
 }
 
+/** Ia as a number, NaN when unknown (tripCurrent gives the reason): no object per call. */
+export function tripAmps(device: Device, requiredTime: number, rules: ResolvedRules): number {
+  switch (device.type) {
+    case 'mcb':
+      return rules.multiples[device.curve].value * device.rating;
+    case 'adjustable':
+      return device.instantaneous * (1 + (device.tolerance ?? DEFAULT_TOLERANCE));
+    case 'fixed':
+      return device.tripCurrent;
+    case 'curve': {
+      const found = curveCurrentAt(device, requiredTime);
+      return found.ia === null ? NaN : found.ia;
+    }
+  }
+}
+
 /** Interpolate y at x on a straight line through (x0, y0), (x1, y1) in log–log space. */
 function logLog(x: number, x0: number, y0: number, x1: number, y1: number): number {
   const f = (Math.log(x) - Math.log(x0)) / (Math.log(x1) - Math.log(x0));

@@ -12,7 +12,7 @@
 
 import type { Link, SupplyNode } from '../model/types.js';
 import type { ResolvedRules } from './basis.js';
-import type { Complex } from './complex.js';
+import { abs, type Complex } from './complex.js';
 import type { TreeOrder } from './order.js';
 import type { PhaseTable } from './phases.js';
 import { sourceImpedance } from './source.js';
@@ -90,6 +90,6 @@ function faultAt(table: FaultTable, order: TreeOrder, phases: PhaseTable, rules:
     re[n] = re[p]! + z.re;
     im[n] = im[p]! + z.im;
   }
-  const mag = Math.hypot(re[n]!, im[n]!);
+  const mag = abs(re[n]!, im[n]!);
   imax[n] = Number.isNaN(mag) ? NaN : mag > 0 ? (rules.maxVoltageFactor.value * rules.voltage.value) / mag : Infinity;
 }

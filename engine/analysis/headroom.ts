@@ -25,8 +25,13 @@ export function sourcePhasor(source: Source): Complex {
 
 /** The largest |Ze| for which |Ze · u + Σ| ≤ B. */
 export function largestSource(u: Complex, loop: Complex, budget: number): number {
-  const m2 = loop.re * loop.re + loop.im * loop.im;
+  return largestSourceOf(u, loop.re, loop.im, budget);
+}
+
+/** largestSource with the loop Σ as its two parts. */
+export function largestSourceOf(u: Complex, re: number, im: number, budget: number): number {
+  const m2 = re * re + im * im;
   if (m2 >= budget * budget) return 0;
-  const h = u.re * loop.re + u.im * loop.im;
+  const h = u.re * re + u.im * im;
   return -h + Math.sqrt(h * h - m2 + budget * budget);
 }

@@ -22,7 +22,8 @@ export class Sums {
   readonly nodeRe: Float64Array;
   readonly nodeIm: Float64Array;
   readonly protect: Int32Array;
-  private readonly zeBySupply = new Map<number, Complex | null>();
+  /** Ze by supply node index (null when unknown; undefined for other nodes). */
+  private readonly zeBySupply: Array<Complex | null> = [];
 
   constructor(
     job: Job,
@@ -63,7 +64,7 @@ export class Sums {
     });
     for (const n of pre) {
       const node = nodes[n]!;
-      if (node.kind === 'supply') this.zeBySupply.set(n, sourceImpedance(node.source, rules.voltage.value));
+      if (node.kind === 'supply') this.zeBySupply[n] = sourceImpedance(node.source, rules.voltage.value);
     }
   }
 
@@ -110,6 +111,6 @@ export class Sums {
   /** Ze of the supply above node n, or null when unknown or unreached. */
   zeOf(n: number): Complex | null {
     const s = this.order.supplyOf[n]!;
-    return s >= 0 ? this.zeBySupply.get(s) ?? null : null;
+    return s >= 0 ? this.zeBySupply[s] ?? null : null;
   }
 }

@@ -16,7 +16,8 @@ export interface WithstandResult {
   notes: string[];
 }
 
-const UNCHECKED: WithstandResult = { earthMinArea: null, status: 'unchecked', notes: [] };
+const UNCHECKED: WithstandResult = Object.freeze({ earthMinArea: null, status: 'unchecked', notes: Object.freeze([]) as unknown as string[] });
+const NO_NOTES = Object.freeze([]) as unknown as string[];
 
 /**
  * faultCurrent null with zeroLoop true: a loop of 0 Ω, checked only through the let-through.
@@ -36,7 +37,8 @@ export function checkWithstand(link: Link, device: Device | null, knownSource: b
   const k = kFactor(cable.earthMaterial ?? cable.material, cable.insulation ?? 'pvc', cable.earthInCable ?? true);
   const min = Math.sqrt(energy) / k;
   const area = cable.earth * (cable.parallel ?? 1);
-  if (atMost(min, area)) return { earthMinArea: min, status: 'pass', notes: [] };
+  // The shared empty, frozen list of notes: callers copy notes out, never add to them.
+  if (atMost(min, area)) return { earthMinArea: min, status: 'pass', notes: NO_NOTES };
   return {
     earthMinArea: min,
     status: 'fail',

@@ -5,19 +5,28 @@ import type { Problem } from './problems.js';
 
 export const STANDARD_SIZES: readonly number[] = [1, 1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 95, 120, 150, 185, 240, 300, 400, 500, 630];
 
+const EXACT = new Set(STANDARD_SIZES);
+
 export function isStandardSize(area: number): boolean {
-  return STANDARD_SIZES.some((s) => Math.abs(s - area) < 1e-9);
+  if (EXACT.has(area)) return true;
+  for (let i = 0; i < STANDARD_SIZES.length; i++) if (Math.abs(STANDARD_SIZES[i]! - area) < 1e-9) return true;
+  return false;
 }
 
-/** Plain-words notes for the non-standard areas of one cable. */
+function sizeNote(key: 'active' | 'earth', area: number): string {
+  return `cable.${key} ${area} mm² is not a standard nominal area (IEC 60228); check it is available`;
+}
+
+/** Plain-words notes for the non-standard areas of one cable (a new list each time). */
 export function sizeNotes(cable: Cable): string[] {
+  const active = cable.active;
+  const earth = cable.earth;
+  const activeOdd = typeof active === 'number' && !isStandardSize(active);
+  const earthOdd = typeof earth === 'number' && !isStandardSize(earth);
+  if (!activeOdd && !earthOdd) return [];
   const notes: string[] = [];
-  for (const key of ['active', 'earth'] as const) {
-    const area = cable[key];
-    if (typeof area === 'number' && !isStandardSize(area)) {
-      notes.push(`cable.${key} ${area} mm² is not a standard nominal area (IEC 60228); check it is available`);
-    }
-  }
+  if (activeOdd) notes.push(sizeNote('active', active));
+  if (earthOdd) notes.push(sizeNote('earth', earth));
   return notes;
 }
 

@@ -3,32 +3,63 @@
 import type { Job, JobNode, Link } from '../../engine/index.js';
 import { newJob } from '../../engine/index.js';
 
-/** A supply, a main switchboard, `boards` distribution boards and `points` final subcircuits spread over them. */
+/**
+ * A supply, a main switchboard, `boards` distribution boards and `points` final subcircuits
+ * spread over them (invented data). Every check has something to work on: the points draw
+ * currents (so design currents, voltage drop and capacity are checked), the boards have a
+ * diversity, the cables state their capacity, the devices their breaking capacity, the supply its
+ * maximum fault level, and every tenth circuit carries a measured reading.
+ */
 export function generateJob(points: number, boards = Math.max(1, Math.ceil(points / 24)), known = true): Job {
   const job = newJob();
   job.job.title = `Generated installation, ${points} circuits`;
   const nodes: JobNode[] = [
-    { id: 'S1', kind: 'supply', name: 'Supply', at: { x: 0, y: 0 }, source: known ? { type: 'fault-current', current: 6000 } : { type: 'unknown' } },
-    { id: 'MSB', kind: 'board', name: 'Main switchboard', at: { x: 0, y: 160 } },
+    {
+      id: 'S1',
+      kind: 'supply',
+      name: 'Supply',
+      at: { x: 0, y: 0 },
+      phases: 3,
+      source: known ? { type: 'fault-current', current: 40000, xr: 3 } : { type: 'unknown' },
+      ...(known ? { maxFault: { current: 45000, xr: 3 } } : {}),
+    },
+    { id: 'MSB', kind: 'board', name: 'Main switchboard', at: { x: 0, y: 160 }, diversity: 0.3 },
   ];
-  const links: Link[] = [{ id: 'M1', from: 'S1', to: 'MSB', cable: { length: 15, material: 'Cu', active: 95, earth: 50 } }];
+  const links: Link[] = [
+    {
+      id: 'M1',
+      from: 'S1',
+      to: 'MSB',
+      cable: { length: 15, material: 'Cu', active: 630, earth: 300, parallel: 4, capacity: 4000, insulation: 'xlpe' },
+      device: { type: 'adjustable', rating: 3200, instantaneous: 10000, breaking: 65 },
+    },
+  ];
   for (let b = 1; b <= boards; b++) {
-    nodes.push({ id: `DB${b}`, kind: 'board', name: `Board ${b}`, at: { x: b * 900, y: 320 } });
-    links.push({ id: `SM${b}`, from: 'MSB', to: `DB${b}`, cable: { length: 20 + (b % 7) * 10, material: 'Cu', active: 25, earth: 16 }, device: { type: 'mcb', curve: 'C', rating: 80 } });
+    nodes.push({ id: `DB${b}`, kind: 'board', name: `Board ${b}`, at: { x: b * 900, y: 320 }, diversity: 0.5 });
+    links.push({
+      id: `SM${b}`,
+      from: 'MSB',
+      to: `DB${b}`,
+      cable: { length: 20 + (b % 7) * 10, material: 'Cu', active: 25, earth: 16, capacity: 100 },
+      device: { type: 'mcb', curve: 'C', rating: 80, breaking: 25 },
+    });
   }
   const uses = ['socket-outlets', 'lighting', 'fixed-equipment', 'motor', 'other'] as const;
   for (let p = 1; p <= points; p++) {
     const board = ((p - 1) % boards) + 1;
     const use = uses[p % uses.length]!;
     const slot = Math.floor((p - 1) / boards);
-    nodes.push({ id: `P${p}`, kind: 'point', name: `Circuit ${p}`, use, at: { x: board * 900 + (slot % 6) * 140, y: 520 + Math.floor(slot / 6) * 160 } });
+    const lighting = use === 'lighting';
+    nodes.push({ id: `P${p}`, kind: 'point', name: `Circuit ${p}`, use, current: lighting ? 0.5 : 1 + (p % 5) * 0.5, at: { x: board * 900 + (slot % 6) * 140, y: 520 + Math.floor(slot / 6) * 160 } });
+    const area = lighting ? 1.5 : 2.5;
     links.push({
       id: `C${p}`,
       from: `DB${board}`,
       to: `P${p}`,
-      cable: { length: 5 + ((p * 7) % 60), material: 'Cu', active: use === 'lighting' ? 1.5 : 2.5, earth: use === 'lighting' ? 1.5 : 2.5 },
-      device: { type: 'mcb', curve: use === 'motor' ? 'D' : use === 'lighting' ? 'B' : 'C', rating: use === 'lighting' ? 10 : 20 },
+      cable: { length: 5 + ((p * 7) % 60), material: 'Cu', active: area, earth: area, capacity: lighting ? 17 : 24 },
+      device: { type: 'mcb', curve: use === 'motor' ? 'D' : lighting ? 'B' : 'C', rating: lighting ? 10 : 20, breaking: 10 },
       ...(use === 'socket-outlets' ? { rcd: { sensitivity: 0.03 } } : {}),
+      ...(p % 10 === 0 ? { measured: { zs: 0.4 + (p % 13) * 0.1, temperature: 20 } } : {}),
     });
   }
   job.nodes = nodes;
