@@ -12,7 +12,8 @@ import type { LinkRole } from './results.js';
 export class TreeOrder {
   readonly nodes: readonly JobNode[];
   readonly links: readonly Link[];
-  readonly nodeIndex = new Map<string, number>();
+  /** Each node id's index (ids of links may map to negative numbers: not nodes). */
+  readonly nodeIndex: ReadonlyMap<string, number>;
   /** Node index of each link's origin and far end (−1 when missing). */
   readonly linkFrom: Int32Array;
   readonly linkTo: Int32Array;
@@ -33,23 +34,35 @@ export class TreeOrder {
   readonly prePosition: Int32Array;
   readonly subtreeSize: Int32Array;
 
-  constructor(job: Job) {
+  /**
+   * `ids`, when given, is where each id is (graph-rules.ts): a node's index (≥ 0), or a negative
+   * number for a link's id; the loader passes it so the ids are not indexed twice.
+   */
+  constructor(job: Job, ids?: ReadonlyMap<string, number>) {
     const nodes = job.nodes;
     const links = job.links;
     this.nodes = nodes;
     this.links = links;
     const nn = nodes.length;
     const nl = links.length;
-    nodes.forEach((n, i) => {
-      if (!this.nodeIndex.has(n.id)) this.nodeIndex.set(n.id, i);
-    });
+    if (ids) this.nodeIndex = ids;
+    else {
+      const index = new Map<string, number>();
+      for (let i = 0; i < nn; i++) {
+        const id = nodes[i]!.id;
+        if (!index.has(id)) index.set(id, i);
+      }
+      this.nodeIndex = index;
+    }
     this.linkFrom = new Int32Array(nl);
     this.linkTo = new Int32Array(nl);
     this.feederOf = new Int32Array(nn).fill(-1);
     const outCount = new Int32Array(nn + 1);
     for (let l = 0; l < nl; l++) {
-      const from = this.nodeIndex.get(links[l]!.from) ?? -1;
-      const to = this.nodeIndex.get(links[l]!.to) ?? -1;
+      const fromCode = this.nodeIndex.get(links[l]!.from);
+      const toCode = this.nodeIndex.get(links[l]!.to);
+      const from = fromCode !== undefined && fromCode >= 0 ? fromCode : -1;
+      const to = toCode !== undefined && toCode >= 0 ? toCode : -1;
       this.linkFrom[l] = from;
       this.linkTo[l] = to;
       if (to >= 0 && from >= 0 && to !== from && this.feederOf[to] === -1 && nodes[to]!.kind !== 'supply') this.feederOf[to] = l;

@@ -1,5 +1,6 @@
-// Small readers that check one field of a record and collect a problem when it is wrong.
-// Every problem names where it is (`links[3] (C4)`), the field, the bad value and what is allowed.
+// The pieces the record checks share: where a problem is (Site), number rules and their words.
+// The records' fields are defined in schema.ts and checked by check-spec.ts. Every problem names
+// where it is (`links[3] (C4)`), the field, the bad value and what is allowed.
 
 import { showValue, type Problem, type Severity } from './problems.js';
 
@@ -69,69 +70,4 @@ export function fitsRule(value: number, rule: NumberRule): boolean {
   if (rule.max !== undefined && value > rule.max) return false;
   if (rule.below !== undefined && value >= rule.below) return false;
   return true;
-}
-
-/**
- * Read a number field. Returns the number when valid, undefined otherwise (absent or bad);
- * a bad value, or a required one that is absent, is reported.
- */
-export function readNumber(site: Site, obj: Json, key: string, rule: NumberRule, opts: { required?: boolean; path?: string } = {}): number | undefined {
-  const field = opts.path ?? key;
-  const value = obj[key];
-  if (value === undefined) {
-    if (opts.required) site.bad(field, describeRule(rule), value);
-    return undefined;
-  }
-  if (typeof value !== 'number' || !fitsRule(value, rule)) {
-    site.bad(field, describeRule(rule), value);
-    return undefined;
-  }
-  return value;
-}
-
-export function readString(site: Site, obj: Json, key: string, opts: { required?: boolean; path?: string; nonEmpty?: boolean } = {}): string | undefined {
-  const field = opts.path ?? key;
-  const value = obj[key];
-  // An optional text given as null reads as absent (other tools write null for "none").
-  if (value === undefined || (value === null && !opts.required)) {
-    if (opts.required) site.bad(field, opts.nonEmpty ? 'a non-empty text' : 'a text', value);
-    return undefined;
-  }
-  if (typeof value !== 'string' || (opts.nonEmpty && value.trim() === '')) {
-    site.bad(field, opts.nonEmpty ? 'a non-empty text' : 'a text', value);
-    return undefined;
-  }
-  return value;
-}
-
-export function readChoice<T extends string | number>(site: Site, obj: Json, key: string, choices: readonly T[], opts: { required?: boolean; path?: string } = {}): T | undefined {
-  const value = obj[key];
-  if (value !== undefined && (choices as readonly unknown[]).includes(value)) return value as T;
-  if (value !== undefined || opts.required) site.bad(opts.path ?? key, `one of ${choices.map((c) => JSON.stringify(c)).join(', ')}`, value);
-  return undefined;
-}
-
-export function readBoolean(site: Site, obj: Json, key: string, opts: { path?: string } = {}): boolean | undefined {
-  const value = obj[key];
-  if (value === undefined) return undefined;
-  if (typeof value !== 'boolean') {
-    site.bad(opts.path ?? key, 'true or false', value);
-    return undefined;
-  }
-  return value;
-}
-
-/** Read a nested object field; reports when present but not an object (or absent and required). */
-export function readObject(site: Site, obj: Json, key: string, opts: { required?: boolean; path?: string } = {}): Json | undefined {
-  const field = opts.path ?? key;
-  const value = obj[key];
-  if (value === undefined) {
-    if (opts.required) site.bad(field, 'an object', value);
-    return undefined;
-  }
-  if (!isObject(value)) {
-    site.bad(field, 'an object', value);
-    return undefined;
-  }
-  return value;
 }

@@ -1,74 +1,104 @@
 // The rules that span records: ids unique, links join existing nodes, every node fed by at most
 // one link, no supply fed, no cycles; and the warning for nodes that no supply reaches.
+// Plain loops over arrays (no recursion, no per-node copies), linear in the job.
 
 import type { JobNode, Link } from './types.js';
 import type { Problem } from './problems.js';
 import { Site } from './fields.js';
 
-interface Indexed<T> {
-  item: T;
-  index: number;
+/** Where each id was first used: a position in `nodes` (≥ 0) or in `links` (−1 − position). */
+export type IdPlaces = Map<string, number>;
+
+const SUPPLY = 0;
+const BOARD = 1;
+const POINT = 2;
+
+export interface GraphFacts {
+  ids: IdPlaces;
+  /** Some link runs from a point to a board (the only way a derived phase count can clash). */
+  pointFeedsBoard: boolean;
 }
 
-function linkSite(problems: Problem[], l: Indexed<Link>): Site {
-  return new Site(problems, () => `links[${l.index}] (${l.item.id})`, l.item.id);
-}
-
-export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<Link>>, problems: Problem[]): void {
-  // Where each id was first used: a position in `nodes` (≥ 0) or in `links` (−1 − position).
-  const seen = new Map<string, number>();
-  const placeOf = (code: number): string => {
-    const at = code >= 0 ? nodes[code]! : links[-1 - code]!;
-    return `${code >= 0 ? 'nodes' : 'links'}[${at.index}] (${at.item.id})`;
+/**
+ * `nodes` and `links` are the records that passed their own checks; `nodeAt` and `linkAt` give
+ * the place of each in the file (null when every record passed, so positions are places).
+ * Returns where each id is, for the passes after (phase-rules.ts, the tree order).
+ */
+export function checkGraph(
+  nodes: readonly JobNode[],
+  nodeAt: readonly number[] | null,
+  links: readonly Link[],
+  linkAt: readonly number[] | null,
+  problems: Problem[],
+): GraphFacts {
+  let pointFeedsBoard = false;
+  const nodePlace = (i: number): number => (nodeAt === null ? i : nodeAt[i]!);
+  const linkPlace = (i: number): number => (linkAt === null ? i : linkAt[i]!);
+  const linkSite = (i: number): Site => {
+    const id = links[i]!.id;
+    return new Site(problems, () => `links[${linkPlace(i)}] (${id})`, id);
   };
-  nodes.forEach((n, i) => {
-    const before = seen.get(n.item.id);
-    if (before !== undefined) new Site(problems, `nodes[${n.index}] (${n.item.id})`, n.item.id).report('id', `id ${JSON.stringify(n.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
-    else seen.set(n.item.id, i);
-  });
-  links.forEach((l, i) => {
-    const before = seen.get(l.item.id);
-    if (before !== undefined) linkSite(problems, l).report('id', `id ${JSON.stringify(l.item.id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
-    else seen.set(l.item.id, -1 - i);
-  });
-  /** The position in `nodes` of the node with this id, or −1. */
-  const nodeAt = (id: string): number => {
-    const code = seen.get(id);
-    return code !== undefined && code >= 0 ? code : -1;
-  };
+  const seen: IdPlaces = new Map();
+  const placeOf = (code: number): string =>
+    code >= 0 ? `nodes[${nodePlace(code)}] (${nodes[code]!.id})` : `links[${linkPlace(-1 - code)}] (${links[-1 - code]!.id})`;
+  const nn = nodes.length;
+  const nl = links.length;
+  // Each node's kind as a number (read once: node records come in many shapes).
+  const kind = new Uint8Array(nn);
+  for (let i = 0; i < nn; i++) {
+    const node = nodes[i]!;
+    const k = node.kind;
+    kind[i] = k === 'supply' ? SUPPLY : k === 'board' ? BOARD : POINT;
+    const id = node.id;
+    const before = seen.get(id);
+    if (before === undefined) seen.set(id, i);
+    else new Site(problems, `nodes[${nodePlace(i)}] (${id})`, id).report('id', `id ${JSON.stringify(id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+  }
+  for (let i = 0; i < nl; i++) {
+    const id = links[i]!.id;
+    const before = seen.get(id);
+    if (before === undefined) seen.set(id, -1 - i);
+    else linkSite(i).report('id', `id ${JSON.stringify(id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+  }
 
   // Each node's feeding link and the node above it, by position in `nodes`.
-  const feederAt: Array<Indexed<Link> | undefined> = new Array(nodes.length);
-  const above = new Int32Array(nodes.length).fill(-1);
-  for (const l of links) {
-    const { from, to } = l.item;
-    const fromAt = nodeAt(from);
-    const toAt = nodeAt(to);
-    if (fromAt < 0) linkSite(problems, l).report('from', `from names ${JSON.stringify(from)}, which is not a node of this job`);
-    if (toAt < 0) linkSite(problems, l).report('to', `to names ${JSON.stringify(to)}, which is not a node of this job`);
+  const feederAt = new Int32Array(nn).fill(-1);
+  const above = new Int32Array(nn).fill(-1);
+  for (let i = 0; i < nl; i++) {
+    const link = links[i]!;
+    const from = link.from;
+    const to = link.to;
+    const fromCode = seen.get(from);
+    const toCode = seen.get(to);
+    const fromAt = fromCode !== undefined && fromCode >= 0 ? fromCode : -1;
+    const toAt = toCode !== undefined && toCode >= 0 ? toCode : -1;
+    if (fromAt < 0) linkSite(i).report('from', `from names ${JSON.stringify(from)}, which is not a node of this job`);
+    if (toAt < 0) linkSite(i).report('to', `to names ${JSON.stringify(to)}, which is not a node of this job`);
     if (from === to) {
-      linkSite(problems, l).report('to', `a link cannot start and end at the same node ${JSON.stringify(to)}`);
+      linkSite(i).report('to', `a link cannot start and end at the same node ${JSON.stringify(to)}`);
       continue;
     }
     if (toAt < 0) continue;
-    if (nodes[toAt]!.item.kind === 'supply') {
-      linkSite(problems, l).report('to', `to names the supply ${JSON.stringify(to)}; a supply is where the network starts and is fed by no link`);
+    if (fromAt >= 0 && kind[fromAt] === POINT && kind[toAt] === BOARD) pointFeedsBoard = true;
+    if (kind[toAt] === SUPPLY) {
+      linkSite(i).report('to', `to names the supply ${JSON.stringify(to)}; a supply is where the network starts and is fed by no link`);
       continue;
     }
-    const other = feederAt[toAt];
-    if (other) {
-      linkSite(problems, l).report('to', `node ${JSON.stringify(to)} is already fed by link ${JSON.stringify(other.item.id)} (links[${other.index}]); every node is fed by exactly one link`);
+    const other = feederAt[toAt]!;
+    if (other >= 0) {
+      linkSite(i).report('to', `node ${JSON.stringify(to)} is already fed by link ${JSON.stringify(links[other]!.id)} (links[${linkPlace(other)}]); every node is fed by exactly one link`);
       continue;
     }
-    feederAt[toAt] = l;
+    feederAt[toAt] = i;
     above[toAt] = fromAt;
   }
 
   // With at most one feeder per node, a cycle shows as a walk up the feeders that returns to
   // itself. state: 0 new, 1 on the current walk, 2 done; each node is walked once.
-  const state = new Uint8Array(nodes.length);
+  const state = new Uint8Array(nn);
   const walk: number[] = [];
-  for (let start = 0; start < nodes.length; start++) {
+  for (let start = 0; start < nn; start++) {
+    if (state[start] !== 0) continue;
     walk.length = 0;
     let current = start;
     while (current >= 0 && state[current] === 0) {
@@ -77,45 +107,47 @@ export function checkGraph(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<
       current = above[current]!;
     }
     if (current >= 0 && state[current] === 1) {
-      const loop = walk.slice(walk.indexOf(current)).map((i) => nodes[i]!.item.id);
-      const loopLinks = walk.slice(walk.indexOf(current)).map((i) => feederAt[i]!).sort((a, b) => a.index - b.index);
+      const from = walk.indexOf(current);
+      const loop = walk.slice(from).map((n) => nodes[n]!.id);
+      const loopLinks = walk.slice(from).map((n) => feederAt[n]!).sort((a, b) => linkPlace(a) - linkPlace(b));
       const first = loopLinks[0]!;
-      linkSite(problems, first).report(
+      linkSite(first).report(
         'to',
-        `to ${JSON.stringify(first.item.to)} closes a cycle: links ${loopLinks.map((l) => l.item.id).join(', ')} loop through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
+        `to ${JSON.stringify(links[first]!.to)} closes a cycle: links ${loopLinks.map((l) => links[l]!.id).join(', ')} loop through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
       );
     }
-    for (const i of walk) state[i] = 2;
+    for (let k = 0; k < walk.length; k++) state[walk[k]!] = 2;
   }
 
   // Unreached nodes: a warning, not an error. reached: 0 unknown, 1 yes, 2 no; each walk up the
   // feeders stops at a node already decided, so every node is visited once.
-  const reached = new Uint8Array(nodes.length);
-  const isReached = (start: number): boolean => {
-    walk.length = 0;
-    let current = start;
-    let answer = 2;
-    while (current >= 0) {
-      if (reached[current] !== 0) {
-        answer = reached[current]!;
-        break;
+  const reached = new Uint8Array(nn);
+  for (let start = 0; start < nn; start++) {
+    if (kind[start] === SUPPLY) continue;
+    if (reached[start] === 0) {
+      walk.length = 0;
+      let current = start;
+      let answer = 2;
+      while (current >= 0) {
+        if (reached[current] !== 0) {
+          answer = reached[current]!;
+          break;
+        }
+        if (kind[current] === SUPPLY) {
+          answer = 1;
+          break;
+        }
+        reached[current] = 2; // provisional: a cycle back to here is unreached
+        walk.push(current);
+        current = above[current]!;
       }
-      if (nodes[current]!.item.kind === 'supply') {
-        answer = 1;
-        break;
-      }
-      reached[current] = 2; // provisional: a cycle back to here is unreached
-      walk.push(current);
-      current = above[current]!;
+      for (let k = 0; k < walk.length; k++) reached[walk[k]!] = answer;
     }
-    for (const i of walk) reached[i] = answer;
-    return answer === 1;
-  };
-  nodes.forEach((n, i) => {
-    if (n.item.kind === 'supply') return;
-    if (!isReached(i)) {
-      const name = n.item.name ? ` "${n.item.name}"` : '';
-      new Site(problems, `nodes[${n.index}] (${n.item.id})`, n.item.id).report('', `${n.item.kind}${name} is not reached from any supply; its circuits are left unchecked`, 'warning');
+    if (reached[start] === 2) {
+      const node = nodes[start]!;
+      const name = node.name ? ` "${node.name}"` : '';
+      new Site(problems, `nodes[${nodePlace(start)}] (${node.id})`, node.id).report('', `${node.kind}${name} is not reached from any supply; its circuits are left unchecked`, 'warning');
     }
-  });
+  }
+  return { ids: seen, pointFeedsBoard };
 }

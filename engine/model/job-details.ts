@@ -1,9 +1,13 @@
 // Job details: the title block of the design (title, site, client, ... revision, date).
+// The fields are defined in schema.ts (DETAILS).
 
 import type { JobDetails } from './types.js';
-import { isObject, readString, Site, type Json } from './fields.js';
+import { isObject, Site, type Json } from './fields.js';
+import { reportFields } from './check-spec.js';
+import { cleanDetails } from './generated/clean.js';
+import * as schema from './schema.js';
 
-export const DETAIL_KEYS = ['title', 'site', 'client', 'designer', 'reference', 'revision', 'date', 'notes'] as const;
+export const DETAIL_KEYS = schema.DETAIL_KEYS;
 
 export function emptyDetails(): JobDetails {
   return { title: '', site: '', client: '', designer: '', reference: '', revision: '', date: '', notes: '' };
@@ -17,9 +21,10 @@ export function validateDetails(value: unknown, site: Site): JobDetails {
     return details;
   }
   const raw: Json = value;
+  if (!cleanDetails(raw)) reportFields(site, raw, schema.DETAILS);
   for (const key of DETAIL_KEYS) {
-    const text = readString(site, raw, key, { path: key });
-    if (text !== undefined) details[key] = text;
+    const text = raw[key];
+    if (typeof text === 'string') details[key] = text;
   }
   return { ...raw, ...details } as JobDetails;
 }

@@ -80,38 +80,64 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   const details = validateDetails(file.job, new Site(problems, 'job'));
   const rules = validateRules(file.rules, new Site(problems, 'rules'));
 
-  const nodes: Array<{ item: JobNode; index: number }> = [];
-  const links: Array<{ item: Link; index: number }> = [];
+  // The records that pass their own checks, and (only once one has not) the place of each.
+  const nodes: JobNode[] = [];
+  const links: Link[] = [];
+  let nodeAt: number[] | null = null;
+  let linkAt: number[] | null = null;
   if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes (use [] for none)', file.nodes);
-  else file.nodes.forEach((raw, index) => {
-    const node = validateNode(raw, index, problems);
-    if (node) nodes.push({ item: node, index });
-  });
+  else {
+    const raw: unknown[] = file.nodes;
+    for (let index = 0; index < raw.length; index++) {
+      const node = validateNode(raw[index], index, problems);
+      if (node !== undefined && nodeAt === null && nodes.length === index) nodes.push(node);
+      else {
+        nodeAt ??= nodes.map((_, i) => i);
+        if (node !== undefined) {
+          nodes.push(node);
+          nodeAt.push(index);
+        }
+      }
+    }
+  }
   if (!Array.isArray(file.links)) top.bad('links', 'a list of links (use [] for none)', file.links);
-  else file.links.forEach((raw, index) => {
-    const link = validateLink(raw, index, problems);
-    if (link) links.push({ item: link, index });
-  });
-  checkGraph(nodes, links, problems);
-  if (!problems.some((p) => p.severity === 'error')) checkPhases(nodes, links, problems);
-  problems.push(...sizeWarnings(links));
+  else {
+    const raw: unknown[] = file.links;
+    for (let index = 0; index < raw.length; index++) {
+      const link = validateLink(raw[index], index, problems);
+      if (link !== undefined && linkAt === null && links.length === index) links.push(link);
+      else {
+        linkAt ??= links.map((_, i) => i);
+        if (link !== undefined) {
+          links.push(link);
+          linkAt.push(index);
+        }
+      }
+    }
+  }
+  const graph = checkGraph(nodes, nodeAt, links, linkAt, problems);
+  if (!problems.some((p) => p.severity === 'error')) checkPhases(nodes, links, graph, problems);
+  const sizes = sizeWarnings(links, linkAt);
+  for (let i = 0; i < sizes.length; i++) problems.push(sizes[i]!);
 
   const errors = problems.filter((p) => p.severity === 'error');
   if (errors.length) return { ok: false, problems: errors };
 
-  const extra: Record<string, unknown> = {};
-  for (const [key, val] of Object.entries(file)) {
-    // defineProperty, so even a key named "__proto__" is kept as plain data.
-    if (!KNOWN_KEYS.has(key)) Object.defineProperty(extra, key, { value: val, enumerable: true, writable: true, configurable: true });
-  }
   const job: Job = {
     format: FORMAT_NAME,
     version: CURRENT_VERSION,
     job: details,
     rules,
-    nodes: nodes.map((n) => n.item),
-    links: links.map((l) => l.item),
+    nodes,
+    links,
   };
-  if (Object.keys(extra).length) job.extra = extra;
+  let extra: Record<string, unknown> | undefined;
+  for (const key of Object.keys(file)) {
+    if (KNOWN_KEYS.has(key)) continue;
+    extra ??= {};
+    // defineProperty, so even a key named "__proto__" is kept as plain data.
+    Object.defineProperty(extra, key, { value: file[key], enumerable: true, writable: true, configurable: true });
+  }
+  if (extra !== undefined) job.extra = extra;
   return { ok: true, job, warnings: problems, migratedFrom };
 }

@@ -8,18 +8,27 @@ import { TreeOrder } from '../analysis/order.js';
 import type { Job, JobNode, Link } from './types.js';
 import type { Problem } from './problems.js';
 import { Site } from './fields.js';
+import type { GraphFacts } from './graph-rules.js';
 
-interface Indexed<T> {
-  item: T;
-  index: number;
-}
-
-export function checkPhases(nodes: Array<Indexed<JobNode>>, links: Array<Indexed<Link>>, problems: Problem[]): void {
-  const job = { nodes: nodes.map((n) => n.item), links: links.map((l) => l.item) } as unknown as Job;
-  const order = new TreeOrder(job);
+/**
+ * `nodes` and `links` as checkGraph took them (every record valid, so positions are places in
+ * the file), `graph` what it returned. Phases can only be refused where a link states its phases,
+ * a point asks for 3, or a link runs from a point to a board (a derived three-phase submain below
+ * a derived single-phase final subcircuit): a job with none of these is passed without ordering it.
+ */
+export function checkPhases(nodes: readonly JobNode[], links: readonly Link[], graph: GraphFacts, problems: Problem[]): void {
+  let stated = graph.pointFeedsBoard;
+  for (let i = 0; i < links.length && !stated; i++) if (links[i]!.phases !== undefined) stated = true;
+  for (let i = 0; i < nodes.length && !stated; i++) {
+    const n = nodes[i]!;
+    if (n.kind === 'point' && n.phases === 3) stated = true;
+  }
+  if (!stated) return;
+  const job = { nodes, links } as unknown as Job;
+  const order = new TreeOrder(job, graph.ids);
   const phases = phaseTable(order);
-  const linkAt = (l: number) => `links[${links[l]!.index}] (${links[l]!.item.id})`;
-  const single = (l: number) => `the single-phase link ${links[l]!.item.id} (${linkAt(l).split(' ')[0]})`;
+  const linkAt = (l: number) => `links[${l}] (${links[l]!.id})`;
+  const single = (l: number) => `the single-phase link ${links[l]!.id} (links[${l}])`;
   for (const n of order.pre) {
     const f = order.feederOf[n]!;
     if (f < 0) continue;
@@ -27,20 +36,20 @@ export function checkPhases(nodes: Array<Indexed<JobNode>>, links: Array<Indexed
     const node = nodes[n]!;
     if (phases.link[f] === 3) {
       const supply = order.supplyOf[n]!;
-      const site = new Site(problems, linkAt(f), links[f]!.item.id);
-      const how = links[f]!.item.phases === 3 ? 'phases 3' : 'three phases (derived)';
+      const site = new Site(problems, linkAt(f), links[f]!.id);
+      const how = links[f]!.phases === 3 ? 'phases 3' : 'three phases (derived)';
       if (supply >= 0 && phases.supply[supply] === 1) {
-        site.report('phases', `${how} is not possible under the single-phase supply ${nodes[supply]!.item.id}; state phases 1, or give the supply phases 3`);
+        site.report('phases', `${how} is not possible under the single-phase supply ${nodes[supply]!.id}; state phases 1, or give the supply phases 3`);
       } else if (phases.singleAbove[from]) {
         let up = order.feederOf[from]!;
         while (up >= 0 && phases.link[up] !== 1) up = order.feederOf[order.linkFrom[up]!]!;
         site.report('phases', `${how} is not possible: it is fed through ${up >= 0 ? single(up) : 'a single-phase link'}`);
       }
     }
-    if (node.item.kind === 'point' && node.item.phases === 3 && phases.link[f] === 1) {
-      new Site(problems, `nodes[${node.index}] (${node.item.id})`, node.item.id).report(
+    if (node.kind === 'point' && node.phases === 3 && phases.link[f] === 1) {
+      new Site(problems, `nodes[${n}] (${node.id})`, node.id).report(
         'phases',
-        `phases 3 needs a three-phase feed, but its link ${links[f]!.item.id} (${linkAt(f).split(' ')[0]}) has 1 phase`,
+        `phases 3 needs a three-phase feed, but its link ${links[f]!.id} (links[${f}]) has 1 phase`,
       );
     }
   }

@@ -30,11 +30,17 @@ export function sizeNotes(cable: Cable): string[] {
   return notes;
 }
 
-export function sizeWarnings(links: Array<{ item: Link; index: number }>): Problem[] {
+/** Warnings for the non-standard areas of the links' cables; `linkAt` gives each link's place
+ *  in the file (null when positions are places). */
+export function sizeWarnings(links: readonly Link[], linkAt: readonly number[] | null = null): Problem[] {
   const out: Problem[] = [];
-  for (const { item, index } of links) {
-    if (!item.cable || typeof item.cable !== 'object') continue;
-    for (const note of sizeNotes(item.cable)) {
+  for (let i = 0; i < links.length; i++) {
+    const item = links[i]!;
+    const cable = item.cable;
+    if (!cable || typeof cable !== 'object') continue;
+    if (isStandardSize(cable.active) && isStandardSize(cable.earth)) continue;
+    const index = linkAt === null ? i : linkAt[i]!;
+    for (const note of sizeNotes(cable)) {
       out.push({ severity: 'warning', where: `links[${index}] (${item.id})`, id: item.id, field: note.split(' ')[0]!, message: note });
     }
   }
