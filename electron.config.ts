@@ -13,7 +13,7 @@ const config: Configuration = {
     output: 'release',
     buildResources: 'assets/build',
   },
-  files: ['dist/**', 'assets/**', 'package.json', '!**/*.map'],
+  files: ['dist/**', 'assets/**', 'package.json', '!**/*.map', '!dist/cli/**'],
   asar: true,
   fileAssociations: [
     {

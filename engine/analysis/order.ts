@@ -9,6 +9,29 @@
 import type { Job, JobNode, Link, SupplyNode } from '../model/types.js';
 import type { LinkRole } from './results.js';
 
+/** Id indexes made while loading, by the nodes list they index (see shareIds). */
+const shared = new WeakMap<readonly JobNode[], { ids: ReadonlyMap<string, number>; nodes: number }>();
+
+/**
+ * Offer the loader's index of ids (each node id → its index, ≥ 0; link ids → negative numbers)
+ * for `nodes`, so that ordering the same job does not index its ids again. The index is used
+ * only while it still matches: the list the same length and every node's id at its own index
+ * (so an edited list, even edited in place, is indexed afresh).
+ */
+export function shareIds(nodes: readonly JobNode[], ids: ReadonlyMap<string, number>): void {
+  shared.set(nodes, { ids, nodes: nodes.length });
+}
+
+function sharedIndex(nodes: readonly JobNode[]): ReadonlyMap<string, number> | null {
+  const entry = shared.get(nodes);
+  if (entry === undefined || entry.nodes !== nodes.length) return null;
+  // The index holds exactly `entry.nodes` node entries (the loader refuses duplicate ids), so
+  // when each present node finds its own index there, the node entries are exactly these.
+  const ids = entry.ids;
+  for (let i = 0; i < nodes.length; i++) if (ids.get(nodes[i]!.id) !== i) return null;
+  return ids;
+}
+
 export class TreeOrder {
   readonly nodes: readonly JobNode[];
   readonly links: readonly Link[];
@@ -45,7 +68,8 @@ export class TreeOrder {
     this.links = links;
     const nn = nodes.length;
     const nl = links.length;
-    if (ids) this.nodeIndex = ids;
+    const known = ids ?? sharedIndex(nodes);
+    if (known) this.nodeIndex = known;
     else {
       const index = new Map<string, number>();
       for (let i = 0; i < nn; i++) {

@@ -11,6 +11,7 @@ import { validateRules } from './rules.js';
 import { validateNode } from './nodes.js';
 import { validateLink } from './links.js';
 import { checkGraph } from './graph-rules.js';
+import { shareIds } from '../analysis/order.js';
 import { checkPhases } from './phase-rules.js';
 import { sizeWarnings } from './sizes.js';
 import { checkLimits, checkValueLimits, jsonSyntaxError } from './limits.js';
@@ -139,5 +140,6 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
     Object.defineProperty(extra, key, { value: file[key], enumerable: true, writable: true, configurable: true });
   }
   if (extra !== undefined) job.extra = extra;
+  shareIds(nodes, graph.ids);
   return { ok: true, job, warnings: problems, migratedFrom };
 }

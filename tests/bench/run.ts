@@ -17,7 +17,8 @@
 // a target or the browser benchmark flags one.
 //
 // Records (not targets): a chain of 50,000 boards and one board with 90,000 circuits, both
-// within the element limit; their load and analyse times.
+// within the element limit; their load and analyse times. Then the command's start-up
+// (`node bin/loopwright.mjs --help`, median of 7; target well under half a second).
 
 import * as engine from '../../engine/index.js';
 import type { Job, Results } from '../../engine/index.js';
@@ -209,6 +210,21 @@ if (records) {
         `  ${name.padEnd(32)} ${String(r.nodes).padStart(6)} nodes ${String(r.links).padStart(6)} links ${(r.fileBytes / 1024 / 1024).toFixed(1).padStart(5)} MiB   ` +
           `JSON.parse ${fmt(r.jsonParseMs, 0).padStart(5)} ms   load ${fmt(r.loadMs, 0).padStart(6)} ms   analyse ${fmt(r.analyseMs, 0).padStart(6)} ms${r.problem !== null ? `   ${r.problem}` : ''}`,
       );
+  }
+}
+
+if (records) {
+  // The installed command's start-up (tests/bench/cli-start.ts): node bin/loopwright.mjs --help.
+  const { measureCliStart, CLI_START_TARGET_MS } = await import('./cli-start.js');
+  try {
+    const start = await measureCliStart();
+    const within = start.medianMs < CLI_START_TARGET_MS;
+    if (!within) failed = true;
+    if (json) console.log(JSON.stringify({ record: 'command start-up', medianMs: Number(start.medianMs.toPrecision(4)), targetMs: CLI_START_TARGET_MS }));
+    else console.log(`\ncommand start-up (node bin/loopwright.mjs --help, median): ${start.medianMs.toFixed(0)} ms, target < ${CLI_START_TARGET_MS} ms ${within ? '✓ within' : '✗ OVER'}`);
+  } catch (error) {
+    failed = true;
+    console.log(`\ncommand start-up: could not be measured: ${error instanceof Error ? error.message : String(error)}`);
   }
 }
 
