@@ -90,6 +90,12 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   else {
     const raw: unknown[] = file.nodes;
     for (let index = 0; index < raw.length; index++) {
+      // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
+      // an edit touched, each at its own index in otherwise empty lists).
+      if (!(index in raw)) {
+        nodeAt ??= nodes.map((_, i) => i);
+        continue;
+      }
       const node = validateNode(raw[index], index, problems);
       if (node !== undefined && nodeAt === null && nodes.length === index) nodes.push(node);
       else {
@@ -105,6 +111,12 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   else {
     const raw: unknown[] = file.links;
     for (let index = 0; index < raw.length; index++) {
+      // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
+      // an edit touched, each at its own index in otherwise empty lists).
+      if (!(index in raw)) {
+        linkAt ??= links.map((_, i) => i);
+        continue;
+      }
       const link = validateLink(raw[index], index, problems);
       if (link !== undefined && linkAt === null && links.length === index) links.push(link);
       else {

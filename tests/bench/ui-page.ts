@@ -67,7 +67,8 @@ export function openScript(text: string, name: string): string {
     input.dispatchEvent(new Event('change', { bubbles: true }));`;
 }
 
-/** Script text: types a value into an input and presses Enter (React sees input + keydown). */
+/** Script text (awaited inside measureScript's action): types a value into an input and presses
+ *  Enter (React sees input, renders, then keydown). */
 export function typeScript(selector: string, value: string): string {
   return `
     const input = document.querySelector(${JSON.stringify(selector)});
@@ -75,6 +76,8 @@ export function typeScript(selector: string, value: string): string {
     input.focus();
     Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value').set.call(input, ${JSON.stringify(value)});
     input.dispatchEvent(new Event('input', { bubbles: true }));
+    // React renders the typed text before the key arrives, as it does between a person's keys.
+    await new Promise((ok) => setTimeout(ok, 0));
     input.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', code: 'Enter', bubbles: true }));`;
 }
 

@@ -197,3 +197,22 @@ describe('the published JSON Schemas', () => {
     expect(Object.keys(schema.$defs)).toEqual(expect.arrayContaining(['details', 'rules', 'node', 'link', 'cable', 'device', 'source']));
   });
 });
+
+describe('sparse lists (the editor checks only the records an edit touched)', () => {
+  it('skips holes, as the records left out are known to be valid, and names true places', async () => {
+    const { loadJob } = await import('../../engine/index.js');
+    const file = JSON.parse(serialiseJob(generateJob(30))) as { nodes: unknown[]; links: Array<Record<string, unknown>> };
+    const nodes: unknown[] = new Array(file.nodes.length);
+    const links: unknown[] = new Array(file.links.length);
+    links[7] = { ...file.links[7], cable: { ...(file.links[7]!.cable as object), length: 40 } };
+    nodes[0] = file.nodes[0];
+    expect(loadJob({ ...file, nodes, links }).ok).toBe(false); // its far end is not among the nodes
+    links[7] = { ...file.links[7], cable: { ...(file.links[7]!.cable as object), length: -4 } };
+    const bad = loadJob({ ...file, nodes, links });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) {
+      expect(bad.problems.some((p) => p.where.startsWith('nodes[1]') || p.message.includes('each node must be an object'))).toBe(false);
+      expect(bad.problems.find((p) => p.field === 'cable.length')?.where).toBe(`links[7] (${String(file.links[7]!.id)})`);
+    }
+  });
+});
