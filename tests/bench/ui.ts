@@ -19,8 +19,10 @@ import { clickScript, measureScript, openScript, START_FRAME_LOG, STOP_FRAME_LOG
 
 const root = resolve(fileURLToPath(new URL('../..', import.meta.url)));
 
-/** Targets on the build machine (2 cores, software rendering). */
-export const UI_TARGETS = { open: 3000, select: 300, edit: 300, undo: 300, dragFrameP95: 50 };
+/** Targets (issue 12) on this machine kind (2 cores, headless Chromium, software rendering):
+ *  the job interactive within 2 s of opening, a typed length changing the circuit's status
+ *  within 100 ms, the median frame of a drag under 16 ms. Selecting and undo: 300 ms (ours). */
+export const UI_TARGETS = { open: 2000, select: 300, edit: 100, undo: 300, dragFrameMedian: 16 };
 
 async function buildRenderer(): Promise<{ dir: string; cleanup(): void }> {
   const given = process.env.LOOPWRIGHT_BENCH_DIST;
@@ -123,11 +125,11 @@ export async function runUiBench(size = Number(process.env.LOOPWRIGHT_BENCH_SIZE
 
     const frames = (await drag(page)).sort((a, b) => a - b);
     if (frames.length > 0) {
+      const median = frames[frames.length >> 1]!;
       const p95 = frames[Math.min(frames.length - 1, Math.floor(frames.length * 0.95))]!;
-      const mean = frames.reduce((a, b) => a + b, 0) / frames.length;
-      const flag = p95 > UI_TARGETS.dragFrameP95 ? `  over target (${UI_TARGETS.dragFrameP95} ms)` : '';
-      console.log(`${'drag a point (40 moves): frame gaps'.padEnd(44)} mean ${mean.toFixed(0)} ms, p95 ${p95.toFixed(0)} ms, worst ${frames.at(-1)!.toFixed(0)} ms${flag}`);
-      over = over || p95 > UI_TARGETS.dragFrameP95;
+      const flag = median >= UI_TARGETS.dragFrameMedian ? `  over target (median < ${UI_TARGETS.dragFrameMedian} ms)` : '';
+      console.log(`${'drag a point (40 moves): frame gaps'.padEnd(44)} median ${median.toFixed(1)} ms, p95 ${p95.toFixed(0)} ms, worst ${frames.at(-1)!.toFixed(0)} ms${flag}`);
+      over = over || median >= UI_TARGETS.dragFrameMedian;
     } else console.log('drag: no point in view to drag');
   } finally {
     await browser.close();

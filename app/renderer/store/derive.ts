@@ -169,7 +169,8 @@ export function derive(job: Job, previous: Record<string, CircuitResult>): Deriv
   const resultById: Record<string, CircuitResult> = {};
   const circuits = results.circuits.map((c) => {
     const old = previous[c.link];
-    const kept = old && sameResult(old, c) ? old : c;
+    // The incremental analysis hands back the very object for a circuit it did not redo.
+    const kept = old === c ? c : old && sameResult(old, c) ? old : c;
     resultById[c.link] = kept;
     return kept;
   });
