@@ -18,7 +18,7 @@ import { correctedReading, correctionFactor, readingTemperature, testLimit } fro
 import { phaseTable, asPhases, type PhaseTable } from './phases.js';
 import type { CircuitResult, CheckStatus, Results, Status, SupplyResult, Summary } from './results.js';
 import { Sums } from './sums.js';
-import { atMost } from './tolerance.js';
+import { atMost, fixedOrRange } from './tolerance.js';
 import { dropTable, dropTableWithLink, voltageDropLimit, type DropTable } from './voltage-drop.js';
 import { checkWithstand } from './withstand.js';
 import { worstPath } from './worst-path.js';
@@ -149,8 +149,9 @@ function checkOne(state: State, l: number): void {
 
   // Design current and voltage drop.
   result.designCurrent = orNull(loads.ib[l]!);
-  result.powerFactor = orNull(loads.pf[l]!);
-  result.voltageDrop = orNull(drops.own[l]!);
+  // With Ib known, a NaN here comes from extreme values (0 · Infinity): out of range, not absent.
+  result.powerFactor = result.designCurrent === null ? null : loads.pf[l]!;
+  result.voltageDrop = result.designCurrent === null ? null : drops.own[l]!;
   const far = to >= 0 && order.nodes[to]!.kind === 'point' ? (order.nodes[to] as PointNode) : null;
   result.voltageDropLimit = voltageDropLimit(link, far, rules);
   if (result.voltageDrop !== null && reached) {
@@ -159,7 +160,7 @@ function checkOne(state: State, l: number): void {
     if (result.voltageDropLimit !== null) {
       result.voltageStatus = atMost(total, result.voltageDropLimit) ? 'pass' : 'fail';
       if (result.voltageStatus === 'fail') {
-        notes.push(`voltage drop: the total ${total.toFixed(2)} % from the supply to ${link.to} exceeds the limit ${result.voltageDropLimit} %`);
+        notes.push(`voltage drop: the total ${fixedOrRange(total, 2, ' %')} from the supply to ${link.to} exceeds the limit ${result.voltageDropLimit} %`);
       }
     }
   }
@@ -219,6 +220,7 @@ function finishOne(state: State, l: number): void {
   if (!needsFixes) {
     result.fixes = [];
     result.verdict = verdictOf(result);
+    keepFinite(result);
     return;
   }
   const p = facts[l]!.protecting;
@@ -233,6 +235,65 @@ function finishOne(state: State, l: number): void {
     pf: result.powerFactor,
   });
   result.verdict = verdictOf(result);
+  keepFinite(result);
+}
+
+/** What each number of a circuit is, for the note when it leaves the range of numbers. */
+const QUANTITIES = [
+  ['tripCurrent', 'the trip current Ia'],
+  ['zs', 'Zs'],
+  ['own', "the circuit's own loop impedance"],
+  ['upstream', 'the upstream loop impedance'],
+  ['limit', 'the loop limit'],
+  ['faultCurrent', 'the fault current'],
+  ['clearingTime', 'the clearing time'],
+  ['ratio', 'the loop ratio'],
+  ['maxLength', 'the maximum length'],
+  ['designCurrent', 'the design current Ib'],
+  ['powerFactor', 'the power factor'],
+  ['voltageDrop', "the link's own voltage drop"],
+  ['voltageDropTotal', 'the total voltage drop'],
+  ['capacity', 'the capacity Iz'],
+  ['faultLevel', 'the fault level'],
+  ['earthMinArea', 'the minimum earth area'],
+  ['testLimit', 'the test limit'],
+] as const;
+
+const READING_WORD: Record<Status, string> = { pass: 'passing', fail: 'failing', rcd: 'relying on the RCD', unchecked: 'not checked' };
+
+const outOfRange = (what: string): string => `${what} is out of range: the job's values are too extreme to compute it, so it is left empty`;
+
+/**
+ * Numbers at the edges (method-depth.md): an extreme but valid value can take a result past the
+ * range of numbers (Infinity, or NaN from Infinity − Infinity, 0 · Infinity). Such a number is
+ * given as null with a note, never as NaN or Infinity. One sum tells whether any is out of range
+ * (a sum of finite values that overflows only sends the circuit through the closer look).
+ */
+function keepFinite(c: CircuitResult): void {
+  const m = c.measured;
+  const sum =
+    (c.tripCurrent ?? 0) + (c.zs ?? 0) + (c.own ?? 0) + (c.upstream ?? 0) + (c.limit ?? 0) + (c.faultCurrent ?? 0) + (c.clearingTime ?? 0) +
+    (c.ratio ?? 0) + (c.maxLength ?? 0) + (c.designCurrent ?? 0) + (c.powerFactor ?? 0) + (c.voltageDrop ?? 0) + (c.voltageDropTotal ?? 0) +
+    (c.capacity ?? 0) + (c.faultLevel ?? 0) + (c.earthMinArea ?? 0) + (c.testLimit ?? 0) + (m === null ? 0 : m.corrected + (m.ratio ?? 0));
+  if (Number.isFinite(sum)) return;
+  const numbers = c as unknown as Record<string, number | null>;
+  for (const [key, what] of QUANTITIES) {
+    const v = numbers[key]!;
+    if (v !== null && !Number.isFinite(v)) {
+      numbers[key] = null;
+      c.notes.push(outOfRange(what));
+    }
+  }
+  if (m !== null) {
+    if (!Number.isFinite(m.corrected)) {
+      // The format has no empty corrected reading: the reading is left out, its verdict kept.
+      c.notes.push(`measured: the reading ${m.zs} Ω cannot be corrected (out of range: the job's values are too extreme), so it is left out; it counts as ${READING_WORD[m.status]}`);
+      c.measured = null;
+    } else if (m.ratio !== null && !Number.isFinite(m.ratio)) {
+      m.ratio = null;
+      c.notes.push(outOfRange("the reading's ratio"));
+    }
+  }
 }
 
 function resultsOf(state: State, summary: Summary = summarise(state.circuits)): Results {
@@ -248,7 +309,7 @@ function resultsOf(state: State, summary: Summary = summarise(state.circuits)): 
   }
   for (let l = 0; l < headroom.length; l++) {
     const z = headroom[l]!;
-    if (Number.isNaN(z)) continue;
+    if (!Number.isFinite(z)) continue; // NaN: does not count; Infinity (extreme values): no limit on the source
     const entry = bySupply[order.supplyOf[order.linkTo[l]!]!];
     if (entry && (entry.maxZe === null || z < entry.maxZe)) {
       entry.maxZe = z;
@@ -257,6 +318,9 @@ function resultsOf(state: State, summary: Summary = summarise(state.circuits)): 
   }
   for (const entry of supplies) {
     if (entry.maxZe !== null && entry.maxZe > 0) entry.minFaultCurrent = rules.voltage.value / entry.maxZe;
+    // A maxZe too small to divide U0 by (extreme values): null, as the format allows (a supply
+    // carries no notes, and the circuits may be shared with an earlier analysis).
+    if (entry.minFaultCurrent === Infinity) entry.minFaultCurrent = null;
   }
   return {
     format: 'loopwright.results',
@@ -295,7 +359,7 @@ function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums:
   let status: Status = atMost(ratio, 1) ? 'pass' : 'fail';
   const protecting = sums.order.links[loop.protecting]!;
   if (status === 'fail') {
-    result.notes.push(`measured: the reading ${reading.zs} Ω, corrected to ${corrected.toFixed(3)} Ω, exceeds the limit ${loop.budget.toFixed(3)} Ω (largest passing reading ${result.testLimit!.toFixed(3)} Ω)`);
+    result.notes.push(`measured: the reading ${reading.zs} Ω, corrected to ${fixedOrRange(corrected, 3, ' Ω')}, exceeds the limit ${fixedOrRange(loop.budget, 3, ' Ω')} (largest passing reading ${fixedOrRange(result.testLimit, 3, ' Ω')})`);
     if (protecting.rcd) status = 'rcd';
   }
   result.measured = { zs: reading.zs, corrected, ratio, status };

@@ -18,7 +18,10 @@ export interface CapacityResult {
   notes: string[];
 }
 
-const amps = (v: number): string => `${Number(v.toPrecision(4))} A`;
+const amps = (v: number): string => {
+  const shown = Number(v.toPrecision(4)); // near the largest double, 4 figures round up to Infinity
+  return Number.isFinite(shown) ? `${shown} A` : Number.isFinite(v) ? `${v} A` : 'out of range';
+};
 
 export function cableCapacity(link: Link, phases: number, rules: ResolvedRules): { iz: number | null; note?: string } {
   const cable = link.cable;

@@ -17,10 +17,10 @@ import { maxLength } from './max-length.js';
 import { requiredTime } from './required-time.js';
 import type { CircuitResult, Status } from './results.js';
 import type { Sums } from './sums.js';
-import { atMost } from './tolerance.js';
+import { atMost, fixedOrRange } from './tolerance.js';
 
 const pct = (v: number): string => `${(v * 100).toFixed(0)} %`;
-const ohms = (v: number): string => `${v.toFixed(3)} Ω`;
+const ohms = (v: number): string => fixedOrRange(v, 3, ' Ω');
 
 /** What the loop check leaves for the later checks and the fixes of one link. */
 export interface LoopFacts {
@@ -132,7 +132,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   if (ze) {
     result.zs = abs(ze.re + drawnRe, ze.im + drawnIm);
     if (result.zs > 0) result.faultCurrent = (c * u0) / result.zs;
-    else {
+    else if (result.zs === 0) {
       facts.zeroLoop = true;
       notes.push('no impedance in the loop: the fault current cannot be computed; checked as if it were above every trip current');
     }
@@ -172,7 +172,10 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
       facts.before = { re: ze.re + beforeRe, im: ze.im + beforeIm };
       result.maxLength = maxLength(facts.before, perMetre, budget);
       status = atMost(result.ratio, 1) ? 'pass' : 'fail';
-      if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${result.faultCurrent?.toFixed(0)} A is below the ${ia.toFixed(0)} A needed to disconnect within ${tReq} s`);
+      // A breaker or stated trip current clears in 0.1 s when If ≥ Ia: the same comparison as the
+      // ratio's, taken from it so that rounding (in the smallest numbers) cannot make them disagree.
+      if (!facts.zeroLoop && device.type !== 'curve') result.clearingTime = status === 'pass' ? INSTANTANEOUS_TIME : null;
+      if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${fixedOrRange(result.faultCurrent, 0, ' A')} is below the ${fixedOrRange(ia, 0, ' A')} needed to disconnect within ${tReq} s`);
       if (!facts.zeroLoop && result.clearingTime === null && device.type === 'curve') {
         status = 'fail';
         notes.push(`the fault current is below the lowest current of the device's time–current curve; its clearing time is unknown`);

@@ -8,6 +8,7 @@
 
 import type { CurveDevice, Device } from '../model/types.js';
 import type { ResolvedRules } from './basis.js';
+import { atMost } from './tolerance.js';
 
 /** Instantaneous devices are relied on for their instantaneous operation only: ≤ 0.1 s. */
 export const INSTANTANEOUS_TIME = 0.1;
@@ -72,7 +73,7 @@ export function curveTimeAt(device: CurveDevice, current: number): number | null
   const points = device.points;
   const first = points[0]!;
   const last = points[points.length - 1]!;
-  if (current < first[0]) return null;
+  if (current < first[0]) return atMost(first[0], current) ? first[1] : null; // within 1e-9 of the lowest current: at it
   if (current >= last[0]) return last[1];
   for (let i = 0; i < points.length - 1; i++) {
     const [i0, t0] = points[i]!;

@@ -80,17 +80,19 @@ export class Sums {
     const nodeRe = this.nodeRe.slice();
     const nodeIm = this.nodeIm.slice();
     const z = linkImpedance(job.links[l]!.cable, this.rules);
-    const dRe = z.re - linkRe[l]!;
-    const dIm = z.im - linkIm[l]!;
     linkRe[l] = z.re;
     linkIm[l] = z.im;
     const to = order.linkTo[l]!;
     if (to >= 0 && order.feederOf[to] === l) {
+      // Summed again from each parent (in pre-order), as the first pass does: the same numbers as
+      // a fresh analysis, also where an extreme value made a sum Infinity (a difference would be NaN).
       const { start, end } = order.subtree(to);
       for (let k = start; k < end; k++) {
         const n = order.pre[k]!;
-        nodeRe[n]! += dRe;
-        nodeIm[n]! += dIm;
+        const f = order.feederOf[n]!;
+        const p = order.linkFrom[f]!;
+        nodeRe[n] = nodeRe[p]! + linkRe[f]!;
+        nodeIm[n] = nodeIm[p]! + linkIm[f]!;
       }
     }
     Object.assign(copy, this, { order, linkRe, linkIm, nodeRe, nodeIm });

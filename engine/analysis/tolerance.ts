@@ -7,3 +7,11 @@ export const RELATIVE_TOLERANCE = 1e-9;
 export function atMost(value: number, limit: number): boolean {
   return value <= limit + Math.abs(limit) * RELATIVE_TOLERANCE;
 }
+
+/**
+ * A computed number for a note: `v.toFixed(digits)` and its unit, or "out of range" when an
+ * extreme (valid) value made it NaN or ±Infinity: no output shows NaN or Infinity.
+ */
+export function fixedOrRange(v: number | null, digits: number, unit = ''): string {
+  return v !== null && Number.isFinite(v) ? `${v.toFixed(digits)}${unit}` : 'out of range';
+}

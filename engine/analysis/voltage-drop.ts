@@ -44,8 +44,8 @@ export function dropTable(order: TreeOrder, phases: PhaseTable, loads: LoadTable
   for (const n of pre) {
     const f = feederOf[n]!;
     if (f < 0) continue;
-    const v = own[f]!;
-    atNode[n] = atNode[linkFrom[f]!]! + (Number.isNaN(v) ? 0 : v);
+    // a link with Ib null adds 0; a drop made NaN by extreme values makes the totals below NaN
+    atNode[n] = atNode[linkFrom[f]!]! + (Number.isNaN(loads.ib[f]!) ? 0 : own[f]!);
   }
   return { own, atNode };
 }
@@ -62,8 +62,7 @@ export function dropTableWithLink(prev: DropTable, order: TreeOrder, phases: Pha
     for (let k = start; k < end; k++) {
       const n = order.pre[k]!;
       const f = order.feederOf[n]!;
-      const v = own[f]!;
-      atNode[n] = atNode[order.linkFrom[f]!]! + (Number.isNaN(v) ? 0 : v);
+      atNode[n] = atNode[order.linkFrom[f]!]! + (Number.isNaN(loads.ib[f]!) ? 0 : own[f]!);
     }
   }
   return { own, atNode };

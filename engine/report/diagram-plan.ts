@@ -116,8 +116,8 @@ function overlapFloor(points: Array<{ x: number; y: number }>): number {
 
 export function planDiagram(job: Job, area: Box): DiagramPlan {
   const auto = job.nodes.some((n) => n.at === undefined);
-  const raw = auto ? autoPositions(job) : new Map(job.nodes.map((n) => [n.id, n.at ?? { x: 0, y: 0 }]));
-  const points = [...raw.values()];
+  let raw = auto ? autoPositions(job) : new Map(job.nodes.map((n) => [n.id, n.at ?? { x: 0, y: 0 }]));
+  let points = [...raw.values()];
   if (points.length === 0) return { scale: 1, auto, pos: new Map(), tiles: [], tileOf: new Map(), area };
   let minX = Infinity;
   let maxX = -Infinity;
@@ -128,6 +128,16 @@ export function planDiagram(job: Job, area: Box): DiagramPlan {
     maxX = Math.max(maxX, p.x);
     minY = Math.min(minY, p.y);
     maxY = Math.max(maxY, p.y);
+  }
+  if (!Number.isFinite(maxX - minX) || !Number.isFinite(maxY - minY)) {
+    // Positions so far apart that their span passes the largest number (near ±1.8e308): the same
+    // drawing from the positions divided by 4, exactly (only their proportions are drawn).
+    raw = new Map([...raw].map(([id, p]) => [id, { x: p.x / 4, y: p.y / 4 }]));
+    points = [...raw.values()];
+    minX /= 4;
+    maxX /= 4;
+    minY /= 4;
+    maxY /= 4;
   }
   const spanX = maxX - minX;
   const spanY = maxY - minY;

@@ -7,6 +7,7 @@ import type { CircuitResult, Fix, LinkRole, Status } from '../analysis/results.j
 /** Ω to 3 decimals (0.576 Ω); an impedance of 10 Ω or more to 2. */
 export function fmtOhm(v: number | null): string {
   if (v === null) return '—';
+  if (!Number.isFinite(v)) return 'out of range'; // Ze or Zsrc worked out here from extreme values
   return Math.abs(v) >= 10 ? v.toFixed(2) : v.toFixed(3);
 }
 
@@ -31,12 +32,14 @@ export function fmtMetre(v: number | null): string {
 /** The used share of the budget as a whole percentage (0.46958 → 47 %). */
 export function fmtRatio(v: number | null): string {
   if (v === null) return '—';
-  return `${Math.round(v * 100)} %`;
+  const pct = Math.round(v * 100);
+  return Number.isFinite(pct) ? `${pct} %` : 'out of range'; // a ratio past 1.8e306
 }
 
 /** A plain number as the user wrote it, without float noise. */
 export function fmtPlain(v: number): string {
-  return String(Number(v.toPrecision(10)));
+  const shown = Number(v.toPrecision(10));
+  return String(Number.isFinite(shown) ? shown : v); // near the largest double, 10 figures round up to Infinity
 }
 
 function trimZeros(text: string): string {
