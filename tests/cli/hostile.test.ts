@@ -13,6 +13,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { analyse, CAUTION, csvCell, loadJob, plainText, scheduleCsv, sheetToSvg, terminalText, xmlText, type Job } from '../../engine/index.js';
 import { layoutReport } from '../../engine/report/index.js';
 import { readTextFile } from '../../app/cli/io.js';
+import { runCli } from '../../app/cli/run.js';
 import { renderCheck } from '../../app/cli/table.js';
 import { board, cable, jobFile, link, mcb, point, unknownSupply } from '../engine/helpers.js';
 import { cli, looksLikeStackTrace } from './run.js';
@@ -148,6 +149,71 @@ describe('a job with hostile names, in process', () => {
     const all = sheets.map(sheetToSvg).join('\n');
     expect(all).toContain('Feed one=main');
     expect(all).toContain('&lt;script&gt;');
+  });
+});
+
+describe('check --json escapes what JSON.stringify leaves raw, in process', () => {
+  // DEL, C1 controls (U+0085 next line, U+009B the one-byte CSI), the bidirectional embeddings and
+  // overrides U+202A–U+202E and the isolates U+2066–U+2069 (Unicode UAX #9): each may only
+  // appear as a \uXXXX escape in the output.
+  const RAW = ['\u007f', '\u0080', '\u0085', '\u009b', '\u009f', '\u202a', '\u202b', '\u202c', '\u202d', '\u202e', '\u2066', '\u2067', '\u2068', '\u2069'];
+  const RAW_RE = /[\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
+  const mixed = `a${RAW.join('b')}z`;
+  const hostile = jobFile({
+    nodes: [unknownSupply(`S\u202e1`), board(`DB\u007f`, { name: mixed, notes: mixed }), point(`P\u2066x\u2069`, 'socket-outlets', { name: mixed, notes: mixed })],
+    links: [
+      link(`M\u009b1`, `S\u202e1`, `DB\u007f`, cable(10, 16, 6), { name: mixed, notes: mixed, device: mcb('C', 63, { label: `lab\u202d${mixed}` }) }),
+      link(`C\u00851`, `DB\u007f`, `P\u2066x\u2069`, cable(20, 2.5, 2.5), { name: mixed, device: mcb('C', 20) }),
+    ],
+  });
+  (hostile.job as Record<string, unknown>).title = mixed;
+  const path = join(scratch, 'raw-json.lwj');
+  writeFileSync(path, JSON.stringify(hostile));
+
+  async function checkJson(): Promise<{ status: number; out: string; err: string }> {
+    let out = '';
+    let err = '';
+    const status = await runCli(['check', '--json', path], { out: (t) => (out += t), err: (t) => (err += t) });
+    return { status, out, err };
+  }
+
+  it('writes every such character of names, ids and labels as \\uXXXX, and reads back the same document', async () => {
+    const run = await checkJson();
+    expect(run.status).not.toBe(2);
+    expect(run.err).toBe('');
+    expect(run.out).not.toMatch(RAW_RE);
+    expect(run.out).not.toMatch(CONTROL);
+    for (const c of RAW) expect(run.out).toContain(`\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+    // the escapes are JSON's own: parsing gives back the results with the texts unchanged
+    const loaded = loadJob(hostile);
+    if (!loaded.ok) throw new Error(loaded.problems.map((p) => p.message).join('\n'));
+    const parsed = JSON.parse(run.out) as ReturnType<typeof analyse>;
+    expect(parsed).toEqual(analyse(loaded.job));
+    expect(parsed.circuits[0]!.name).toBe(mixed);
+    expect(parsed.circuits[0]!.link).toBe('M\u009b1');
+    expect(parsed.circuits[0]!.device).toBe(`lab\u202d${mixed}`);
+    expect(parsed.circuits[1]!.to).toBe('P\u2066x\u2069');
+    expect(parsed.supplies[0]!.node).toBe('S\u202e1');
+  });
+
+  it('changes nothing else: the hostile job of this file differs from JSON.stringify only in those escapes', async () => {
+    // its names hold U+202E and U+009B (escaped here) and ESC, which JSON.stringify escapes itself
+    const text = JSON.stringify(analyse(job), null, 2);
+    expect(text).toContain('\u202e');
+    expect(text).toContain('\u009b');
+    let out = '';
+    await runCli(['check', '--json', file], { out: (t) => (out += t), err: () => undefined });
+    expect(out).toBe(`${text.replaceAll('\u202e', '\\u202e').replaceAll('\u009b', '\\u009b')}\n`);
+    expect(out).toContain('\\u001b[31mred'); // ESC, as JSON.stringify writes it
+  });
+
+  it('keeps other characters as they are (accents, Ω, emoji, the no-break space)', async () => {
+    const path2 = join(scratch, 'plain-json.lwj');
+    const name = 'Küche é Ω 😀 a\u00a0b';
+    writeFileSync(path2, JSON.stringify(jobFile({ nodes: [unknownSupply('S1'), point('P1', 'lighting')], links: [link('C1', 'S1', 'P1', cable(5, 1.5, 1.5), { name, device: mcb('B', 10) })] })));
+    let out = '';
+    await runCli(['check', '--json', path2], { out: (t) => (out += t), err: () => undefined });
+    expect(out).toContain(`"name": "${name}"`);
   });
 });
 

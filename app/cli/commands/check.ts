@@ -28,6 +28,20 @@ export function exitFor(results: Results): number {
   return v.fail > 0 || v.rcd > 0 || s.fail > 0 || s.rcd > 0 ? EXIT.findings : EXIT.ok;
 }
 
+/**
+ * DEL, the C1 controls and the bidirectional embeddings, overrides and isolates (U+007F–U+009F,
+ * U+202A–U+202E, U+2066–U+2069), which JSON.stringify leaves raw: written as \uXXXX, so that no
+ * name or id from the job can act on a terminal or reorder what it shows. JSON has these only
+ * inside strings, so a replace over the whole text is safe; a parser reads back the same text.
+ */
+const RAW_IN_JSON = /[\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+
+/** The results document as `check --json` prints it (ending with a newline). */
+export function resultsJson(results: Results): string {
+  const text = JSON.stringify(results, null, 2).replace(RAW_IN_JSON, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  return `${text}\n`;
+}
+
 export const check: Command = {
   summary: 'check every circuit of a job: fault loop, voltage drop, capacity, breaking, withstand, readings',
   usage: 'check JOB.lwj [--json] [--csv] [--checks]',
@@ -66,7 +80,7 @@ export const check: Command = {
     const { job, warnings } = loaded.load;
     const results = analyse(job);
     if (args.options.json === true) {
-      out(`${JSON.stringify(results, null, 2)}\n`);
+      out(resultsJson(results));
     } else if (args.options.csv === true) {
       out(scheduleCsv(job, results));
     } else {
