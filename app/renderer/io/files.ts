@@ -1,6 +1,6 @@
 // Opening and saving jobs. Desktop: through window.loopwright (the main process shows the
 // dialogs). Browser: a file input to open, and the File System Access API or a download to save.
-import { formatProblem, parseJob, serialiseJob } from '../../../engine/index.js';
+import { formatProblem, LIMITS, parseJob, serialiseJob } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
 import { useUi } from '../app/ui.js';
 import { rememberSaved } from './autosave.js';
@@ -27,11 +27,31 @@ export function openText(text: string, name: string, path: string | null = null)
   return true;
 }
 
+const megabytes = (bytes: number): string => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+
+/**
+ * A file over the size limit is refused from its size, before any of it is read (the loader's
+ * limit, engine/model/limits.ts, and the same words); the open job stays as it was.
+ */
+export function refuseLarge(file: Pick<File, 'name' | 'size'>): boolean {
+  if (file.size <= LIMITS.size) return false;
+  const line = formatProblem({
+    severity: 'error',
+    where: 'file',
+    field: '',
+    message: `the file is ${megabytes(file.size)}, over the limit of ${megabytes(LIMITS.size)} for a job file; nothing was read`,
+  });
+  useUi.getState().showProblems(`${file.name} could not be opened`, [line]);
+  useEditor.getState().setMessage({ kind: 'error', text: `${file.name} could not be opened: it is larger than ${megabytes(LIMITS.size)}, the limit for a job file` });
+  return true;
+}
+
 /** The file input's change handler. */
 export async function openFromInput(input: HTMLInputElement): Promise<void> {
   const file = input.files?.[0];
   input.value = '';
   if (!file) return;
+  if (refuseLarge(file)) return;
   if (!confirmDiscard(`Open ${file.name}`)) return;
   openText(await file.text(), file.name);
 }
