@@ -6,6 +6,9 @@ import type { Cable, Status } from '../../engine/index.js';
 const DASH = '–';
 
 function fixed(value: number, digits: number): string {
+  // A value past the range of numbers (a ratio near the largest number, times 100) is not a
+  // figure to print: the table shows it as out of range, never "Infinity" or "NaN".
+  if (!Number.isFinite(value)) return 'out of range';
   const text = value.toFixed(digits);
   return text === `-${(0).toFixed(digits)}` ? (0).toFixed(digits) : text;
 }

@@ -80,27 +80,40 @@ export interface SectionPlan {
   sheetOf: Map<string, number>;
 }
 
-function order(job: Job, links: Link[], nodes: Map<string, JobNode>): Link[] {
+/** Links leaving each node, in drawing order: by the far end's position where every node has
+ *  one (else as in the file), ties in file order. Worked out once per job, each list sorted once. */
+function childLists(job: Job, nodes: Map<string, JobNode>): (id: string) => Link[] {
+  const kids = new Map<string, Link[]>();
+  for (const l of job.links) {
+    const list = kids.get(l.from);
+    if (list) list.push(l);
+    else kids.set(l.from, [l]);
+  }
   const drawn = job.nodes.every((n) => n.at !== undefined);
-  if (!drawn) return links;
   const idx = new Map(job.links.map((l, i) => [l.id, i]));
-  return [...links].sort((a, b) => {
-    const pa = nodes.get(a.to)?.at ?? { x: 0, y: 0 };
-    const pb = nodes.get(b.to)?.at ?? { x: 0, y: 0 };
-    return pa.x - pb.x || pa.y - pb.y || (idx.get(a.id) ?? 0) - (idx.get(b.id) ?? 0);
-  });
+  const sorted = new Set<string>();
+  const none: Link[] = [];
+  return (id) => {
+    const list = kids.get(id);
+    if (!list) return none;
+    if (drawn && !sorted.has(id)) {
+      sorted.add(id);
+      list.sort((a, b) => {
+        const pa = nodes.get(a.to)?.at ?? { x: 0, y: 0 };
+        const pb = nodes.get(b.to)?.at ?? { x: 0, y: 0 };
+        return pa.x - pb.x || pa.y - pb.y || (idx.get(a.id) ?? 0) - (idx.get(b.id) ?? 0);
+      });
+    }
+    return list;
+  };
 }
 
 /** Sections in reading order, or null when one cannot fit the area at all. */
 export function buildSections(job: Job, area: Box, inline: boolean): Section[] | null {
   const nodes = new Map(job.nodes.map((n) => [n.id, n]));
-  const kids = new Map<string, Link[]>();
   const feed = new Map<string, Link>();
-  for (const l of job.links) {
-    kids.set(l.from, [...(kids.get(l.from) ?? []), l]);
-    feed.set(l.to, l);
-  }
-  const children = (id: string): Link[] => order(job, kids.get(id) ?? [], nodes);
+  for (const l of job.links) feed.set(l.to, l);
+  const children = childLists(job, nodes);
   const isBoard = (id: string): boolean => nodes.get(id)?.kind === 'board';
   const maxCols = Math.floor((area.w - 6 - GUTTER - 32) / CW) + 1;
   const sections: Section[] = [];
@@ -109,21 +122,19 @@ export function buildSections(job: Job, area: Box, inline: boolean): Section[] |
     const list: ColumnNode[] = [];
     let slots = 0;
     let levels = 0;
-    const visit = (link: Link, parent: string | null, level: number): number => {
+    // Pre-order with a stack of its own (a chain of points can be as deep as the file makes it).
+    // A node's slot is the first free slot when it is reached; only a node with nothing drawn
+    // below it takes one.
+    const stack: Array<{ link: Link; parent: string | null; level: number }> = [{ link: top, parent: null, level: 0 }];
+    while (stack.length > 0) {
+      const { link, parent, level } = stack.pop()!;
       levels = Math.max(levels, level + 1);
       const stub = isBoard(link.to);
       const below = stub ? [] : children(link.to);
-      const entry: ColumnNode = { id: link.to, link, slot: slots, level, parent, stub };
-      list.push(entry);
+      list.push({ id: link.to, link, slot: slots, level, parent, stub });
       if (below.length === 0) slots++;
-      else {
-        const first = slots;
-        below.forEach((k) => visit(k, link.to, level + 1));
-        entry.slot = first;
-      }
-      return entry.slot;
-    };
-    visit(top, null, 0);
+      else for (let k = below.length - 1; k >= 0; k--) stack.push({ link: below[k]!, parent: link.to, level: level + 1 });
+    }
     return { nodes: list, slots, levels };
   };
 
