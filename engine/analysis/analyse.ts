@@ -5,10 +5,10 @@
 // A few passes over one ordered tree (order.ts): the loop sums and the fault-level sums down the
 // tree, the design currents up it, then the checks of each link from the values at its ends.
 
-import type { Job, PointNode, SupplyNode } from '../model/types.js';
+import type { Device, Job, PointNode, SupplyNode } from '../model/types.js';
 import { resolveRules, type ResolvedRules } from './basis.js';
 import { applyCapacity } from './capacity.js';
-import { blankResult, checkLoop, type LoopFacts } from './check.js';
+import { blankResult, checkLoopInto, LoopTable } from './check.js';
 import { loadTable, type LoadTable } from './design-current.js';
 import { faultTable, faultTableWithLink, type FaultTable } from './fault-level.js';
 import { findFixes } from './fixes.js';
@@ -41,7 +41,7 @@ interface State {
   loads: LoadTable;
   drops: DropTable;
   faults: FaultTable;
-  facts: LoopFacts[];
+  facts: LoopTable;
   circuits: CircuitResult[];
   /** The largest source impedance each checked link tolerates (NaN when it does not count). */
   headroom: Float64Array;
@@ -61,7 +61,7 @@ export function createAnalysis(job: Job): Analysis {
   const loads = loadTable(order, phases);
   const drops = dropTable(order, phases, loads, rules);
   const faults = faultTable(order, phases, rules);
-  const state: State = { rules, sums, phases, loads, drops, faults, facts: new Array<LoopFacts>(job.links.length), circuits: new Array<CircuitResult>(job.links.length), headroom: new Float64Array(job.links.length).fill(NaN), phasors: [] };
+  const state: State = { rules, sums, phases, loads, drops, faults, facts: new LoopTable(job.links.length), circuits: new Array<CircuitResult>(job.links.length), headroom: new Float64Array(job.links.length).fill(NaN), phasors: [] };
   for (let l = 0; l < job.links.length; l++) checkOne(state, l);
   // Fixes need the protecting link's design current, known only now.
   for (let l = 0; l < job.links.length; l++) finishOne(state, l);
@@ -85,7 +85,7 @@ export function reanalyse(previous: Analysis, job: Job): Analysis {
     sums,
     drops: dropTableWithLink(prev.drops, order, prev.phases, prev.loads, prev.rules, l),
     faults: faultTableWithLink(prev.faults, order, prev.phases, prev.rules, l),
-    facts: prev.facts.slice(),
+    facts: prev.facts.copy(),
     circuits: prev.circuits.slice(),
     headroom: prev.headroom.slice(),
   };
@@ -138,8 +138,10 @@ function checkOne(state: State, l: number): void {
   const order = sums.order;
   const link = order.links[l]!;
   const result = blankResult(link, order.roles[l]!);
-  const loop = checkLoop(sums, l, result);
-  state.facts[l] = loop;
+  const loop = state.facts;
+  checkLoopInto(sums, l, result, loop);
+  const device = loop.deviceOf(order, l);
+  const budget = loop.budgetOf(l);
   state.circuits[l] = result;
   const reached = sums.reached(l);
   const to = order.linkTo[l]!;
@@ -166,7 +168,7 @@ function checkOne(state: State, l: number): void {
   }
 
   // Capacity: Ib ≤ In ≤ Iz.
-  const rating = loop.device ? loop.device.rating : null;
+  const rating = device ? device.rating : null;
   const capacity = applyCapacity(link, result.phases, result.designCurrent, rating, rules, notes);
   result.capacity = capacity.iz;
   result.capacityStatus = capacity.status;
@@ -186,18 +188,18 @@ function checkOne(state: State, l: number): void {
   }
 
   // Withstand of the protective conductor.
-  const withstand = checkWithstand(link, loop.device, loop.ze !== null, result.faultCurrent, loop.zeroLoop, result.clearingTime);
+  const withstand = checkWithstand(link, device, loop.knownSource(l), result.faultCurrent, loop.zeroLoop[l] === 1, result.clearingTime);
   result.earthMinArea = withstand.earthMinArea;
   result.withstandStatus = withstand.status;
   if (withstand.notes.length > 0) notes.push(...withstand.notes);
 
   // Measured reading and the test limit.
-  measuredResult(result, loop, l, sums, rules);
+  measuredResult(result, budget, device, loop.protecting[l]!, l, sums, rules);
 
   // What this link allows of the source (source headroom).
   state.headroom[l] = NaN;
-  if (loop.budget !== null && reached) {
-    state.headroom[l] = largestSourceOf(phasorOf(state, order.supplyOf[to]!), sums.nodeRe[to]!, sums.nodeIm[to]!, loop.budget);
+  if (budget !== null && reached) {
+    state.headroom[l] = largestSourceOf(phasorOf(state, order.supplyOf[to]!), sums.nodeRe[to]!, sums.nodeIm[to]!, budget);
   }
 }
 
@@ -218,16 +220,15 @@ function finishOne(state: State, l: number): void {
   const result = circuits[l]!;
   const needsFixes = result.status === 'fail' || result.status === 'rcd' || result.voltageStatus === 'fail';
   if (!needsFixes) {
-    result.fixes = [];
     result.verdict = verdictOf(result);
     keepFinite(result);
     return;
   }
-  const p = facts[l]!.protecting;
+  const p = facts.protecting[l]!;
   result.fixes = findFixes({
     link,
     result,
-    facts: facts[l]!,
+    facts: facts.factsOf(sums.order, l),
     rules,
     protecting: p >= 0 ? sums.order.links[p]! : null,
     protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
@@ -333,7 +334,7 @@ function resultsOf(state: State, summary: Summary = summarise(state.circuits)): 
   };
 }
 
-function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums: Sums, rules: ResolvedRules): void {
+function measuredResult(result: CircuitResult, budget: number | null, device: Device | null, protectingIndex: number, l: number, sums: Sums, rules: ResolvedRules): void {
   const link = sums.order.links[l]!;
   if (!sums.reached(l)) {
     // No supply, so no budget and no measured Ze: the reading is still corrected (Zem = 0).
@@ -346,20 +347,20 @@ function measuredResult(result: CircuitResult, loop: LoopFacts, l: number, sums:
   const supply = sums.order.supplyNode(sums.order.linkTo[l]!);
   const zem = supply?.measured?.ze ?? 0;
   const reading = link.measured;
-  if (!reading && loop.budget === null) return;
+  if (!reading && budget === null) return;
   const factor = correctionFactor(link.cable.material, readingTemperature(link), rules);
-  if (loop.budget !== null) result.testLimit = testLimit(loop.budget, zem, factor);
+  if (budget !== null) result.testLimit = testLimit(budget, zem, factor);
   if (!reading) return;
   const corrected = correctedReading(reading.zs, zem, factor);
-  if (loop.budget === null || !loop.device) {
+  if (budget === null || !device) {
     result.measured = { zs: reading.zs, corrected, ratio: null, status: 'unchecked' };
     return;
   }
-  const ratio = corrected / loop.budget;
+  const ratio = corrected / budget;
   let status: Status = atMost(ratio, 1) ? 'pass' : 'fail';
-  const protecting = sums.order.links[loop.protecting]!;
+  const protecting = sums.order.links[protectingIndex]!;
   if (status === 'fail') {
-    result.notes.push(`measured: the reading ${reading.zs} Ω, corrected to ${fixedOrRange(corrected, 3, ' Ω')}, exceeds the limit ${fixedOrRange(loop.budget, 3, ' Ω')} (largest passing reading ${fixedOrRange(result.testLimit, 3, ' Ω')})`);
+    result.notes.push(`measured: the reading ${reading.zs} Ω, corrected to ${fixedOrRange(corrected, 3, ' Ω')}, exceeds the limit ${fixedOrRange(budget, 3, ' Ω')} (largest passing reading ${fixedOrRange(result.testLimit, 3, ' Ω')})`);
     if (protecting.rcd) status = 'rcd';
   }
   result.measured = { zs: reading.zs, corrected, ratio, status };

@@ -12,11 +12,11 @@ import type { Device, Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
 import { abs, type Complex } from './complex.js';
 import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripAmps, tripCurrent } from './devices.js';
-import { impedancePerMetre } from './impedance.js';
-import { maxLength } from './max-length.js';
+import { maxLengthOf } from './max-length.js';
 import { requiredTime } from './required-time.js';
 import type { CircuitResult, Status } from './results.js';
 import type { Sums } from './sums.js';
+import type { TreeOrder } from './order.js';
 import { atMost, fixedOrRange } from './tolerance.js';
 
 const pct = (v: number): string => `${(v * 100).toFixed(0)} %`;
@@ -38,17 +38,79 @@ export interface LoopFacts {
   zeroLoop: boolean;
 }
 
-/** LoopFacts built by a constructor, like CircuitRecord: the analysis keeps one per link. */
-class Facts implements LoopFacts {
-  ze: Complex | null = null;
-  budget: number | null = null;
-  before: Complex | null = null;
-  zeroLoop = false;
-  constructor(
-    readonly protecting: number,
-    readonly device: Device | null,
-    readonly perMetre: Complex,
-  ) {}
+/**
+ * The loop facts of every link, in typed arrays (no objects per link: the analysis keeps them
+ * for the later checks, the fixes and a re-analysis). NaN stands for null.
+ */
+export class LoopTable {
+  readonly protecting: Int32Array;
+  readonly budget: Float64Array;
+  readonly beforeRe: Float64Array;
+  readonly beforeIm: Float64Array;
+  readonly perRe: Float64Array;
+  readonly perIm: Float64Array;
+  /** Ze at the link's supply (NaN when unknown or unreached). */
+  readonly zeRe: Float64Array;
+  readonly zeIm: Float64Array;
+  readonly zeroLoop: Uint8Array;
+
+  constructor(links: number, from?: LoopTable) {
+    this.protecting = from ? from.protecting.slice() : new Int32Array(links).fill(-1);
+    this.budget = from ? from.budget.slice() : new Float64Array(links).fill(NaN);
+    this.beforeRe = from ? from.beforeRe.slice() : new Float64Array(links).fill(NaN);
+    this.beforeIm = from ? from.beforeIm.slice() : new Float64Array(links).fill(NaN);
+    this.perRe = from ? from.perRe.slice() : new Float64Array(links);
+    this.perIm = from ? from.perIm.slice() : new Float64Array(links);
+    this.zeRe = from ? from.zeRe.slice() : new Float64Array(links).fill(NaN);
+    this.zeIm = from ? from.zeIm.slice() : new Float64Array(links).fill(NaN);
+    this.zeroLoop = from ? from.zeroLoop.slice() : new Uint8Array(links);
+  }
+
+  copy(): LoopTable {
+    return new LoopTable(this.protecting.length, this);
+  }
+
+  /** Forget what an earlier check of link l left. */
+  clear(l: number): void {
+    this.protecting[l] = -1;
+    this.budget[l] = NaN;
+    this.beforeRe[l] = NaN;
+    this.beforeIm[l] = NaN;
+    this.perRe[l] = 0;
+    this.perIm[l] = 0;
+    this.zeRe[l] = NaN;
+    this.zeIm[l] = NaN;
+    this.zeroLoop[l] = 0;
+  }
+
+  budgetOf(l: number): number | null {
+    const b = this.budget[l]!;
+    return Number.isNaN(b) ? null : b;
+  }
+
+  knownSource(l: number): boolean {
+    return !Number.isNaN(this.zeRe[l]!);
+  }
+
+  /** The device protecting link l, or null. */
+  deviceOf(order: TreeOrder, l: number): Device | null {
+    const p = this.protecting[l]!;
+    return p >= 0 ? order.links[p]!.device ?? null : null;
+  }
+
+  /** Link l's facts as one object (for the fixes and the breakdown). */
+  factsOf(order: TreeOrder, l: number): LoopFacts {
+    const before = Number.isNaN(this.beforeRe[l]!) ? null : { re: this.beforeRe[l]!, im: this.beforeIm[l]! };
+    return {
+      protecting: this.protecting[l]!,
+      device: this.deviceOf(order, l),
+      ze: this.knownSource(l) ? { re: this.zeRe[l]!, im: this.zeIm[l]! } : null,
+      budget: this.budgetOf(l),
+      before,
+      perMetre: { re: this.perRe[l]!, im: this.perIm[l]! },
+      zeroLoop: this.zeroLoop[l] === 1,
+    };
+  }
 }
 
 /** A circuit's results before any check (built by a constructor: see blankResult). */
@@ -105,7 +167,15 @@ export function blankResult(link: Link, role: CircuitResult['role']): CircuitRes
   return new CircuitRecord(link, role);
 }
 
+/** The loop check of link l on its own, its facts as one object (the breakdown's use). */
 export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFacts {
+  const table = new LoopTable(sums.order.links.length);
+  checkLoopInto(sums, l, result, table);
+  return table.factsOf(sums.order, l);
+}
+
+/** The loop check of link l: its results into `result`, its facts into `table` at l. */
+export function checkLoopInto(sums: Sums, l: number, result: CircuitResult, table: LoopTable): void {
   const { order, rules } = sums;
   const link = order.links[l]!;
   const notes = result.notes;
@@ -113,17 +183,28 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   const device = protecting >= 0 ? order.links[protecting]!.device ?? null : null;
   result.protectedBy = protecting >= 0 ? order.links[protecting]!.id : null;
   result.device = device ? deviceMark(device) : null;
-  const perMetre = impedancePerMetre(link.cable, rules);
-  const facts: LoopFacts = new Facts(protecting, device, perMetre);
+  table.clear(l);
+  table.protecting[l] = protecting;
+  // impedancePerMetre's arithmetic, into the table.
+  const cable = link.cable;
+  const n = cable.parallel ?? 1;
+  const perRe = (rules.resistivity[cable.material].value / cable.active + rules.resistivity[cable.earthMaterial ?? cable.material].value / cable.earth) / n;
+  const perIm = (2 * (cable.reactance ?? rules.reactance.value)) / n;
+  table.perRe[l] = perRe;
+  table.perIm[l] = perIm;
 
   const to = order.linkTo[l]!;
   const from = order.linkFrom[l]!;
   if (!sums.reached(l)) {
     notes.unshift('no supply reaches this link; it is not checked');
-    return facts;
+    return;
   }
   const ze = sums.zeOf(to);
-  facts.ze = ze;
+  if (ze) {
+    table.zeRe[l] = ze.re;
+    table.zeIm[l] = ze.im;
+  }
+  let zeroLoop = false;
   result.method = ze ? 'known-source' : 'unknown-source';
   const c = rules.voltageFactor.value;
   const u0 = rules.voltage.value;
@@ -133,13 +214,14 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
     result.zs = abs(ze.re + drawnRe, ze.im + drawnIm);
     if (result.zs > 0) result.faultCurrent = (c * u0) / result.zs;
     else if (result.zs === 0) {
-      facts.zeroLoop = true;
+      zeroLoop = true;
+      table.zeroLoop[l] = 1;
       notes.push('no impedance in the loop: the fault current cannot be computed; checked as if it were above every trip current');
     }
   }
   if (!device) {
     notes.unshift('no protective device at the origin of this circuit; its impedance is counted but it is not checked');
-    return facts;
+    return;
   }
 
   const origin = order.linkFrom[protecting]!;
@@ -153,7 +235,7 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   const amps = tripAmps(device, tReq, rules);
   const ia = Number.isNaN(amps) ? null : amps;
   if (ze) {
-    if (facts.zeroLoop) result.clearingTime = device.type === 'curve' ? device.points[device.points.length - 1]![1] : INSTANTANEOUS_TIME;
+    if (zeroLoop) result.clearingTime = device.type === 'curve' ? device.points[device.points.length - 1]![1] : INSTANTANEOUS_TIME;
     else if (result.faultCurrent !== null) result.clearingTime = clearingTime(device, result.faultCurrent, ia);
   }
   const beforeRe = sums.nodeRe[from]!;
@@ -164,19 +246,22 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
     status = 'fail';
   } else {
     const budget = (c * u0) / ia;
-    facts.budget = budget;
+    table.budget[l] = budget;
     result.tripCurrent = ia;
     if (ze) {
       result.limit = budget;
       result.ratio = result.zs! / budget;
-      facts.before = { re: ze.re + beforeRe, im: ze.im + beforeIm };
-      result.maxLength = maxLength(facts.before, perMetre, budget);
+      const aRe = ze.re + beforeRe;
+      const aIm = ze.im + beforeIm;
+      table.beforeRe[l] = aRe;
+      table.beforeIm[l] = aIm;
+      result.maxLength = maxLengthOf(aRe, aIm, perRe, perIm, budget);
       status = atMost(result.ratio, 1) ? 'pass' : 'fail';
       // A breaker or stated trip current clears in 0.1 s when If ≥ Ia: the same comparison as the
       // ratio's, taken from it so that rounding (in the smallest numbers) cannot make them disagree.
-      if (!facts.zeroLoop && device.type !== 'curve') result.clearingTime = status === 'pass' ? INSTANTANEOUS_TIME : null;
+      if (!zeroLoop && device.type !== 'curve') result.clearingTime = status === 'pass' ? INSTANTANEOUS_TIME : null;
       if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${fixedOrRange(result.faultCurrent, 0, ' A')} is below the ${fixedOrRange(ia, 0, ' A')} needed to disconnect within ${tReq} s`);
-      if (!facts.zeroLoop && result.clearingTime === null && device.type === 'curve') {
+      if (!zeroLoop && result.clearingTime === null && device.type === 'curve') {
         status = 'fail';
         notes.push(`the fault current is below the lowest current of the device's time–current curve; its clearing time is unknown`);
       }
@@ -188,8 +273,11 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
       const upRatio = upLimit > 0 ? result.upstream / upLimit : result.upstream > 0 ? Number.MAX_VALUE : 0;
       result.limit = ownLimit;
       result.ratio = Math.max(ownRatio, upRatio);
-      facts.before = { re: beforeRe - upRe, im: beforeIm - upIm };
-      result.maxLength = maxLength(facts.before, perMetre, ownLimit);
+      const aRe = beforeRe - upRe;
+      const aIm = beforeIm - upIm;
+      table.beforeRe[l] = aRe;
+      table.beforeIm[l] = aIm;
+      result.maxLength = maxLengthOf(aRe, aIm, perRe, perIm, ownLimit);
       status = atMost(result.ratio, 1) ? 'pass' : 'fail';
       if (!atMost(ownRatio, 1)) notes.push(`the circuit's own loop ${ohms(result.own)} exceeds ${pct(share)} of the loop budget (${ohms(ownLimit)})`);
       if (!atMost(upRatio, 1)) {
@@ -206,5 +294,4 @@ export function checkLoop(sums: Sums, l: number, result: CircuitResult): LoopFac
   }
   if (protecting !== l) notes.push(`protected by the device of ${protectingLink.id}`);
   result.status = status;
-  return facts;
 }

@@ -85,10 +85,14 @@ function faultAt(table: FaultTable, order: TreeOrder, phases: PhaseTable, rules:
       im[n] = src.im;
     }
   } else if (f >= 0) {
-    const z = faultContribution(order.links[f]!, phases.link[f]!, rules);
+    // faultContribution's arithmetic, without an object per link.
+    const c = order.links[f]!.cable;
+    const k = (phases.link[f] === 3 ? 1 : 2) / (c.parallel ?? 1);
+    const rho = rules.shortCircuitResistivity[c.material].value;
+    const x = c.reactance ?? rules.reactance.value;
     const p = order.linkFrom[f]!;
-    re[n] = re[p]! + z.re;
-    im[n] = im[p]! + z.im;
+    re[n] = re[p]! + (k * rho * c.length) / c.active;
+    im[n] = im[p]! + k * x * c.length;
   }
   const mag = abs(re[n]!, im[n]!);
   imax[n] = Number.isNaN(mag) ? NaN : mag > 0 ? (rules.maxVoltageFactor.value * rules.voltage.value) / mag : Infinity;

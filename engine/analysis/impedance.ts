@@ -24,3 +24,13 @@ export function linkImpedance(cable: Cable, rules: ResolvedRules): Complex {
   const z = impedancePerMetre(cable, rules);
   return { re: z.re * cable.length, im: z.im * cable.length };
 }
+
+/** linkImpedance of `cable` written into re[l] and im[l] (the same arithmetic, no object). */
+export function linkImpedanceInto(cable: Cable, rules: ResolvedRules, re: Float64Array, im: Float64Array, l: number): void {
+  const rhoActive = rules.resistivity[cable.material].value;
+  const rhoEarth = rules.resistivity[cable.earthMaterial ?? cable.material].value;
+  const n = cable.parallel ?? 1;
+  const x = cable.reactance ?? rules.reactance.value;
+  re[l] = ((rhoActive / cable.active + rhoEarth / cable.earth) / n) * cable.length;
+  im[l] = ((2 * x) / n) * cable.length;
+}

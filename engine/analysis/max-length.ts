@@ -7,13 +7,18 @@
 // when the source is unknown), z the link's impedance per metre, B the limit. Take the positive
 // root; 0 when A alone already reaches B.
 
-import { magnitude, type Complex } from './complex.js';
+import { abs, type Complex } from './complex.js';
 
 export function maxLength(before: Complex, perMetre: Complex, limit: number): number {
-  if (magnitude(before) >= limit) return 0;
-  const a = perMetre.re * perMetre.re + perMetre.im * perMetre.im;
-  const b = before.re * perMetre.re + before.im * perMetre.im; // half the linear coefficient
-  const c = before.re * before.re + before.im * before.im - limit * limit; // < 0 here
+  return maxLengthOf(before.re, before.im, perMetre.re, perMetre.im, limit);
+}
+
+/** maxLength with A and z as their parts. */
+export function maxLengthOf(beforeRe: number, beforeIm: number, zRe: number, zIm: number, limit: number): number {
+  if (abs(beforeRe, beforeIm) >= limit) return 0;
+  const a = zRe * zRe + zIm * zIm;
+  const b = beforeRe * zRe + beforeIm * zIm; // half the linear coefficient
+  const c = beforeRe * beforeRe + beforeIm * beforeIm - limit * limit; // < 0 here
   if (a === 0) return Number.POSITIVE_INFINITY;
   return (-b + Math.sqrt(b * b - a * c)) / a;
 }

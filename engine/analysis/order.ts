@@ -9,27 +9,48 @@
 import type { Job, JobNode, Link, SupplyNode } from '../model/types.js';
 import type { LinkRole } from './results.js';
 
-/** Id indexes made while loading, by the nodes list they index (see shareIds). */
-const shared = new WeakMap<readonly JobNode[], { ids: ReadonlyMap<string, number>; nodes: number }>();
+/** What the loader worked out about a job's ids, by the nodes list it was worked out for. */
+interface SharedIds {
+  ids: ReadonlyMap<string, number>;
+  links: readonly Link[];
+  /** The ids and ends as they were, to see that the lists were not edited since. */
+  nodeIds: string[];
+  fromIds: string[];
+  toIds: string[];
+  linkFrom: Int32Array;
+  linkTo: Int32Array;
+}
+const shared = new WeakMap<readonly JobNode[], SharedIds>();
 
 /**
  * Offer the loader's index of ids (each node id → its index, ≥ 0; link ids → negative numbers)
- * for `nodes`, so that ordering the same job does not index its ids again. The index is used
- * only while it still matches: the list the same length and every node's id at its own index
- * (so an edited list, even edited in place, is indexed afresh).
+ * and each link's ends as node indices, for `nodes` and `links`, so that ordering the same job
+ * does not index its ids again. They are used only while they still match: the same lists, of
+ * the same lengths, with every node's id and every link's ends as they were (so an edited list,
+ * even one edited in place, is indexed afresh).
  */
-export function shareIds(nodes: readonly JobNode[], ids: ReadonlyMap<string, number>): void {
-  shared.set(nodes, { ids, nodes: nodes.length });
+export function shareIds(nodes: readonly JobNode[], links: readonly Link[], ids: ReadonlyMap<string, number>, linkFrom: Int32Array, linkTo: Int32Array): void {
+  const nodeIds = new Array<string>(nodes.length);
+  for (let i = 0; i < nodes.length; i++) nodeIds[i] = nodes[i]!.id;
+  const fromIds = new Array<string>(links.length);
+  const toIds = new Array<string>(links.length);
+  for (let i = 0; i < links.length; i++) {
+    fromIds[i] = links[i]!.from;
+    toIds[i] = links[i]!.to;
+  }
+  shared.set(nodes, { ids, links, nodeIds, fromIds, toIds, linkFrom, linkTo });
 }
 
-function sharedIndex(nodes: readonly JobNode[]): ReadonlyMap<string, number> | null {
+function sharedFor(nodes: readonly JobNode[], links: readonly Link[]): SharedIds | null {
   const entry = shared.get(nodes);
-  if (entry === undefined || entry.nodes !== nodes.length) return null;
-  // The index holds exactly `entry.nodes` node entries (the loader refuses duplicate ids), so
-  // when each present node finds its own index there, the node entries are exactly these.
-  const ids = entry.ids;
-  for (let i = 0; i < nodes.length; i++) if (ids.get(nodes[i]!.id) !== i) return null;
-  return ids;
+  if (entry === undefined || entry.links !== links || entry.nodeIds.length !== nodes.length || entry.fromIds.length !== links.length) return null;
+  const { nodeIds, fromIds, toIds } = entry;
+  for (let i = 0; i < nodes.length; i++) if (nodes[i]!.id !== nodeIds[i]) return null;
+  for (let i = 0; i < links.length; i++) {
+    const link = links[i]!;
+    if (link.from !== fromIds[i] || link.to !== toIds[i]) return null;
+  }
+  return entry;
 }
 
 export class TreeOrder {
@@ -68,8 +89,9 @@ export class TreeOrder {
     this.links = links;
     const nn = nodes.length;
     const nl = links.length;
-    const known = ids ?? sharedIndex(nodes);
-    if (known) this.nodeIndex = known;
+    const known = ids === undefined ? sharedFor(nodes, links) : null;
+    if (ids) this.nodeIndex = ids;
+    else if (known) this.nodeIndex = known.ids;
     else {
       const index = new Map<string, number>();
       for (let i = 0; i < nn; i++) {
@@ -83,10 +105,17 @@ export class TreeOrder {
     this.feederOf = new Int32Array(nn).fill(-1);
     const outCount = new Int32Array(nn + 1);
     for (let l = 0; l < nl; l++) {
-      const fromCode = this.nodeIndex.get(links[l]!.from);
-      const toCode = this.nodeIndex.get(links[l]!.to);
-      const from = fromCode !== undefined && fromCode >= 0 ? fromCode : -1;
-      const to = toCode !== undefined && toCode >= 0 ? toCode : -1;
+      let from: number;
+      let to: number;
+      if (known) {
+        from = known.linkFrom[l]!;
+        to = known.linkTo[l]!;
+      } else {
+        const fromCode = this.nodeIndex.get(links[l]!.from);
+        const toCode = this.nodeIndex.get(links[l]!.to);
+        from = fromCode !== undefined && fromCode >= 0 ? fromCode : -1;
+        to = toCode !== undefined && toCode >= 0 ? toCode : -1;
+      }
       this.linkFrom[l] = from;
       this.linkTo[l] = to;
       if (to >= 0 && from >= 0 && to !== from && this.feederOf[to] === -1 && nodes[to]!.kind !== 'supply') this.feederOf[to] = l;

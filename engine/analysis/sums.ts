@@ -9,7 +9,7 @@
 import type { Job } from '../model/types.js';
 import type { ResolvedRules } from './basis.js';
 import type { Complex } from './complex.js';
-import { linkImpedance } from './impedance.js';
+import { linkImpedance, linkImpedanceInto } from './impedance.js';
 import { TreeOrder } from './order.js';
 import { sourceImpedance } from './source.js';
 
@@ -34,11 +34,7 @@ export class Sums {
     const { links, nodes, pre, feederOf, linkFrom } = this.order;
     this.linkRe = new Float64Array(links.length);
     this.linkIm = new Float64Array(links.length);
-    links.forEach((link, l) => {
-      const z = linkImpedance(link.cable, rules);
-      this.linkRe[l] = z.re;
-      this.linkIm[l] = z.im;
-    });
+    for (let l = 0; l < links.length; l++) linkImpedanceInto(links[l]!.cable, rules, this.linkRe, this.linkIm, l);
     this.nodeRe = new Float64Array(nodes.length);
     this.nodeIm = new Float64Array(nodes.length);
     this.protect = new Int32Array(links.length).fill(-1);

@@ -17,6 +17,9 @@ export interface GraphFacts {
   ids: IdPlaces;
   /** Some link runs from a point to a board (the only way a derived phase count can clash). */
   pointFeedsBoard: boolean;
+  /** Each link's origin and far end as positions in `nodes` (−1 when not a node). */
+  linkFrom: Int32Array;
+  linkTo: Int32Array;
 }
 
 /**
@@ -64,6 +67,8 @@ export function checkGraph(
   // Each node's feeding link and the node above it, by position in `nodes`.
   const feederAt = new Int32Array(nn).fill(-1);
   const above = new Int32Array(nn).fill(-1);
+  const linkFrom = new Int32Array(nl);
+  const linkTo = new Int32Array(nl);
   for (let i = 0; i < nl; i++) {
     const link = links[i]!;
     const from = link.from;
@@ -72,6 +77,8 @@ export function checkGraph(
     const toCode = seen.get(to);
     const fromAt = fromCode !== undefined && fromCode >= 0 ? fromCode : -1;
     const toAt = toCode !== undefined && toCode >= 0 ? toCode : -1;
+    linkFrom[i] = fromAt;
+    linkTo[i] = toAt;
     if (fromAt < 0) linkSite(i).report('from', `from names ${JSON.stringify(from)}, which is not a node of this job`);
     if (toAt < 0) linkSite(i).report('to', `to names ${JSON.stringify(to)}, which is not a node of this job`);
     if (from === to) {
@@ -149,5 +156,5 @@ export function checkGraph(
       new Site(problems, `nodes[${nodePlace(start)}] (${node.id})`, node.id).report('', `${node.kind}${name} is not reached from any supply; its circuits are left unchecked`, 'warning');
     }
   }
-  return { ids: seen, pointFeedsBoard };
+  return { ids: seen, pointFeedsBoard, linkFrom, linkTo };
 }

@@ -152,6 +152,6 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
     Object.defineProperty(extra, key, { value: file[key], enumerable: true, writable: true, configurable: true });
   }
   if (extra !== undefined) job.extra = extra;
-  shareIds(nodes, graph.ids);
+  shareIds(nodes, links, graph.ids, graph.linkFrom, graph.linkTo);
   return { ok: true, job, warnings: problems, migratedFrom };
 }

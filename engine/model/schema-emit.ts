@@ -103,7 +103,7 @@ function mapFunction(e: Emitter, spec: MapSpec): string {
       '  for (const k of Object.keys(v)) {',
       `    if (${keyTest}) return false;`,
       '    const x = v[k];',
-      `    if (!(${ruleTest('x', (spec.value as NumberSpec).rule)})) return false;`,
+      `    if (x !== undefined && !(${ruleTest('x', (spec.value as NumberSpec).rule)})) return false;`,
       '  }',
       '  return true;',
       '}',

@@ -90,7 +90,7 @@ function cleanMap1(v: any): boolean {
   for (const k of Object.keys(v)) {
     if (k !== "Cu" && k !== "Al") return false;
     const x = v[k];
-    if (!(typeof x === 'number' && x > 0 && x <= 1)) return false;
+    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 1)) return false;
   }
   return true;
 }
@@ -100,7 +100,7 @@ function cleanMap2(v: any): boolean {
   for (const k of Object.keys(v)) {
     if (k !== "Cu" && k !== "Al") return false;
     const x = v[k];
-    if (!(typeof x === 'number' && x > 0 && x <= 1)) return false;
+    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 1)) return false;
   }
   return true;
 }
@@ -110,7 +110,7 @@ function cleanMap3(v: any): boolean {
   for (const k of Object.keys(v)) {
     if (k !== "Cu" && k !== "Al") return false;
     const x = v[k];
-    if (!(typeof x === 'number' && x > 0 && x <= 1)) return false;
+    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 1)) return false;
   }
   return true;
 }
@@ -120,7 +120,7 @@ function cleanMap4(v: any): boolean {
   for (const k of Object.keys(v)) {
     if (k !== "B" && k !== "C" && k !== "D") return false;
     const x = v[k];
-    if (!(typeof x === 'number' && x > 0 && x <= 100)) return false;
+    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 100)) return false;
   }
   return true;
 }
