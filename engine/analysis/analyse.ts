@@ -16,7 +16,7 @@ import { largestSourceOf, sourcePhasor } from './headroom.js';
 import type { Complex } from './complex.js';
 import { correctedReading, correctionFactor, readingTemperature, testLimit } from './measured.js';
 import { phaseTable, asPhases, type PhaseTable } from './phases.js';
-import type { CircuitResult, CheckStatus, Results, Status, SupplyResult, Summary } from './results.js';
+import type { CheckCounts, CircuitResult, CheckStatus, Results, Status, StatusCounts, SupplyResult, Summary } from './results.js';
 import { Sums } from './sums.js';
 import { atMost, fixedOrRange } from './tolerance.js';
 import { dropTable, dropTableWithLink, voltageDropLimit, type DropTable } from './voltage-drop.js';
@@ -387,13 +387,28 @@ function summarise(circuits: readonly CircuitResult[]): Summary {
 
 /** Add (by = 1) or take away (by = −1) one circuit's statuses. */
 function count(summary: Summary, c: CircuitResult, by: 1 | -1): void {
-  summary[c.status] += by;
-  summary.verdict[c.verdict] += by;
-  summary.checks.voltage[c.voltageStatus] += by;
-  summary.checks.capacity[c.capacityStatus] += by;
-  summary.checks.breaking[c.breakingStatus] += by;
-  summary.checks.withstand[c.withstandStatus] += by;
-  if (c.measured) summary.checks.measured[c.measured.status] += by;
+  addStatus(summary, c.status, by);
+  addStatus(summary.verdict, c.verdict, by);
+  const checks = summary.checks;
+  addCheck(checks.voltage, c.voltageStatus, by);
+  addCheck(checks.capacity, c.capacityStatus, by);
+  addCheck(checks.breaking, c.breakingStatus, by);
+  addCheck(checks.withstand, c.withstandStatus, by);
+  if (c.measured) addStatus(checks.measured, c.measured.status, by);
+}
+
+// Spelt out rather than counts[status] += by: a property named by a variable is a slow lookup.
+function addStatus(counts: StatusCounts, status: Status, by: number): void {
+  if (status === 'pass') counts.pass += by;
+  else if (status === 'fail') counts.fail += by;
+  else if (status === 'rcd') counts.rcd += by;
+  else counts.unchecked += by;
+}
+
+function addCheck(counts: CheckCounts, status: CheckStatus, by: number): void {
+  if (status === 'pass') counts.pass += by;
+  else if (status === 'fail') counts.fail += by;
+  else counts.unchecked += by;
 }
 
 function cloneSummary(s: Summary): Summary {

@@ -27,7 +27,7 @@ import { generateChain, generateJob, generateWideBoard } from './generate.js';
 
 const SIZES = [100, 1_000, 10_000];
 const TARGETS = { load: 1.5, analyse: 1, reanalyse: 1 / 20 };
-const ROUNDS = 11;
+const ROUNDS = 21;
 const ROUND_MS = 20;
 
 const argv = new Set(process.argv.slice(2));
