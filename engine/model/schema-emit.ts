@@ -34,6 +34,7 @@ function ruleTest(x: string, rule: NumberRule): string {
 interface Emitter {
   functions: Map<string, string>;
   maps: number;
+  mapNames: Map<string, string>;
 }
 
 function test(e: Emitter, x: string, spec: Spec, required: boolean): string {
@@ -93,7 +94,12 @@ function objectFunction(e: Emitter, spec: ObjectSpec): string {
 }
 
 function mapFunction(e: Emitter, spec: MapSpec): string {
+  // One function per kind of map (the three resistivity maps share one).
+  const kind = `map:${JSON.stringify([spec.keys, spec.value.rule])}`;
+  const known = e.mapNames.get(kind);
+  if (known) return known;
   const name = `cleanMap${++e.maps}`;
+  e.mapNames.set(kind, name);
   const keyTest = spec.keys.map((k) => `k !== ${JSON.stringify(k)}`).join(' && ');
   e.functions.set(
     name,
@@ -148,7 +154,7 @@ function cleanPoints(v: any): boolean {
 
 /** The source of engine/model/generated/clean.ts. */
 export function emitClean(): string {
-  const e: Emitter = { functions: new Map(), maps: 0 };
+  const e: Emitter = { functions: new Map(), maps: 0, mapNames: new Map() };
   for (const spec of Object.values(RECORDS)) objectFunction(e, spec);
   return `${PRELUDE}\n${[...e.functions.values()].join('\n\n')}\n`;
 }

@@ -69,9 +69,9 @@ export function cleanRules(v: any): boolean {
   x = v.resistivity;
   if (!(x === undefined || (cleanMap1(x)))) return false;
   x = v.voltageDropResistivity;
-  if (!(x === undefined || (cleanMap2(x)))) return false;
+  if (!(x === undefined || (cleanMap1(x)))) return false;
   x = v.shortCircuitResistivity;
-  if (!(x === undefined || (cleanMap3(x)))) return false;
+  if (!(x === undefined || (cleanMap1(x)))) return false;
   x = v.voltageDropLimit;
   if (!(x === undefined || (typeof x === 'number' && x > 0 && x <= 100))) return false;
   x = v.maxVoltageFactor;
@@ -81,7 +81,7 @@ export function cleanRules(v: any): boolean {
   x = v.measuredFactor;
   if (!(x === undefined || (typeof x === 'number' && x > 0 && x <= 1))) return false;
   x = v.multiples;
-  if (!(x === undefined || (cleanMap4(x)))) return false;
+  if (!(x === undefined || (cleanMap2(x)))) return false;
   return true;
 }
 
@@ -96,26 +96,6 @@ function cleanMap1(v: any): boolean {
 }
 
 function cleanMap2(v: any): boolean {
-  if (typeof v !== 'object' || v === null || Array.isArray(v)) return false;
-  for (const k of Object.keys(v)) {
-    if (k !== "Cu" && k !== "Al") return false;
-    const x = v[k];
-    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 1)) return false;
-  }
-  return true;
-}
-
-function cleanMap3(v: any): boolean {
-  if (typeof v !== 'object' || v === null || Array.isArray(v)) return false;
-  for (const k of Object.keys(v)) {
-    if (k !== "Cu" && k !== "Al") return false;
-    const x = v[k];
-    if (x !== undefined && !(typeof x === 'number' && x > 0 && x <= 1)) return false;
-  }
-  return true;
-}
-
-function cleanMap4(v: any): boolean {
   if (typeof v !== 'object' || v === null || Array.isArray(v)) return false;
   for (const k of Object.keys(v)) {
     if (k !== "B" && k !== "C" && k !== "D") return false;
