@@ -103,27 +103,29 @@ export function checkGraph(
   // With at most one feeder per node, a cycle shows as a walk up the feeders that returns to
   // itself. state: 0 new, 1 on the current walk, 2 done; each node is walked once.
   const state = new Uint8Array(nn);
-  const walk: number[] = [];
+  const walk = new Int32Array(nn); // the nodes of the current walk: walk[0 .. top)
+  let top = 0;
   for (let start = 0; start < nn; start++) {
     if (state[start] !== 0) continue;
-    walk.length = 0;
+    top = 0;
     let current = start;
     while (current >= 0 && state[current] === 0) {
       state[current] = 1;
-      walk.push(current);
+      walk[top++] = current;
       current = above[current]!;
     }
     if (current >= 0 && state[current] === 1) {
-      const from = walk.indexOf(current);
-      const loop = walk.slice(from).map((n) => nodes[n]!.id);
-      const loopLinks = walk.slice(from).map((n) => feederAt[n]!).sort((a, b) => linkPlace(a) - linkPlace(b));
+      const on = Array.from(walk.subarray(0, top));
+      const from = on.indexOf(current);
+      const loop = on.slice(from).map((n) => nodes[n]!.id);
+      const loopLinks = on.slice(from).map((n) => feederAt[n]!).sort((a, b) => linkPlace(a) - linkPlace(b));
       const first = loopLinks[0]!;
       linkSite(first).report(
         'to',
         `to ${JSON.stringify(links[first]!.to)} closes a cycle: links ${loopLinks.map((l) => links[l]!.id).join(', ')} loop through nodes ${loop.join(', ')}; the network must be radial (a tree from each supply)`,
       );
     }
-    for (let k = 0; k < walk.length; k++) state[walk[k]!] = 2;
+    for (let k = 0; k < top; k++) state[walk[k]!] = 2;
   }
 
   // Unreached nodes: a warning, not an error. reached: 0 unknown, 1 yes, 2 no; each walk up the
@@ -132,7 +134,7 @@ export function checkGraph(
   for (let start = 0; start < nn; start++) {
     if (kind[start] === SUPPLY) continue;
     if (reached[start] === 0) {
-      walk.length = 0;
+      top = 0;
       let current = start;
       let answer = 2;
       while (current >= 0) {
@@ -145,10 +147,10 @@ export function checkGraph(
           break;
         }
         reached[current] = 2; // provisional: a cycle back to here is unreached
-        walk.push(current);
+        walk[top++] = current;
         current = above[current]!;
       }
-      for (let k = 0; k < walk.length; k++) reached[walk[k]!] = answer;
+      for (let k = 0; k < top; k++) reached[walk[k]!] = answer;
     }
     if (reached[start] === 2) {
       const node = nodes[start]!;
