@@ -85,7 +85,7 @@ describe('opening in the browser', () => {
   });
 
   it('names the size of a much larger file', async () => {
-    const { input, read } = inputWith('video.lwj', 3 * 1024 * 1024 * 1024, '');
+    const { input, read } = inputWith('archive.lwj', 3 * 1024 * 1024 * 1024, '');
     await openFromInput(input);
     expect(read).not.toHaveBeenCalled();
     expect(useUi.getState().problems?.lines).toEqual(['file: the file is 3072.0 MB, over the limit of 50.0 MB for a job file; nothing was read']);
