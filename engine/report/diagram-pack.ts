@@ -14,18 +14,39 @@ const PIECE_GAP = 4;
 /** Step of the balancing search, mm. */
 const BALANCE_STEP = 1;
 
-function sum(list: number[], from: number, to: number): number {
-  let t = 0;
-  for (let i = from; i < to; i++) t += list[i] ?? 0;
-  return t;
+/** A placement fits when it overshoots the room by no more than this, mm (sums taken in
+ *  different orders differ in the last bits). */
+const FIT_SLACK = 1e-9;
+/** Candidate sheets for the legend that are tried by packing again from scratch; past these, a
+ *  sheet takes it only when it already has the room (the same packing, so no pack at all). */
+const LEGEND_REPACKS = 4;
+
+/** Running sums of each section's row heights, so any run of rows is summed in constant time. */
+const prefixes = new WeakMap<Section, Float64Array>();
+function sum(s: Section, from: number, to: number): number {
+  let p = prefixes.get(s);
+  if (p === undefined) {
+    p = new Float64Array(s.rowH.length + 1);
+    for (let i = 0; i < s.rowH.length; i++) p[i + 1] = p[i]! + (s.rowH[i] ?? 0);
+    prefixes.set(s, p);
+  }
+  return p[to]! - p[from]!;
+}
+
+/** Pack limits past which the caller has no use for the result: more sheets or split sections. */
+interface Stop {
+  sheets: number;
+  splits: number;
 }
 
 /**
  * Pack the sections onto sheets of width `width`, sheet i holding at most `room(i)` mm of height;
  * null when a row cannot fit an empty sheet.
  */
-function pack(sections: Section[], width: number, room: (sheet: number) => number): Piece[][] | null {
+function pack(sections: Section[], width: number, room: (sheet: number) => number, stop?: Stop): Piece[][] | null {
   const sheets: Piece[][] = [[]];
+  let cut = 0;
+  let over = false;
   let shelfY = 0;
   let shelfBottom = 0;
   let cursorX = 0;
@@ -42,10 +63,12 @@ function pack(sections: Section[], width: number, room: (sheet: number) => numbe
     while (first || rowsLeft() > 0) {
       const h = room(sheets.length - 1);
       const head = headHeight(s, first);
-      const whole = head + sum(s.rowH, from, s.rows.length);
+      const whole = head + sum(s, from, s.rows.length);
       const sheet = sheets[sheets.length - 1] ?? [];
       const place = (x: number, y: number, to: number, ph: number, as = s): void => {
         sheet.push({ section: as, first, from, to, x, y, w: as.w, h: ph });
+        if (!first) cut++;
+        if (stop !== undefined && (sheets.length > stop.sheets || cut > stop.splits)) over = true;
         cursorX = x + as.w + PIECE_GAP;
         shelfBottom = Math.max(shelfBottom, y + ph);
         from = to;
@@ -53,23 +76,26 @@ function pack(sections: Section[], width: number, room: (sheet: number) => numbe
       };
       // Beside the pieces already on this shelf, in a narrower shape if that one fits.
       const beside = sheet.length === 0 ? undefined : (first ? [s, ...s.alts] : [s]).find((v) =>
-        cursorX + v.w <= width && shelfY + headHeight(v, first) + sum(v.rowH, from, v.rows.length) <= h);
+        cursorX + v.w <= width + FIT_SLACK && shelfY + headHeight(v, first) + sum(v, from, v.rows.length) <= h + FIT_SLACK);
       if (beside !== undefined) {
-        place(cursorX, shelfY, beside.rows.length, headHeight(beside, first) + sum(beside.rowH, from, beside.rows.length), beside);
+        place(cursorX, shelfY, beside.rows.length, headHeight(beside, first) + sum(beside, from, beside.rows.length), beside);
+        if (over) return null;
         continue;
       }
       // On a new shelf below, whole or as many rows as fit.
       const y = sheet.length === 0 ? 0 : shelfBottom + PIECE_GAP;
-      if (y + whole <= h) {
+      if (y + whole <= h + FIT_SLACK) {
         shelfY = y;
         place(0, y, s.rows.length, whole);
+        if (over) return null;
         continue;
       }
       let fit = from;
-      while (fit < s.rows.length && y + head + sum(s.rowH, from, fit + 1) <= h) fit++;
+      while (fit < s.rows.length && y + head + sum(s, from, fit + 1) <= h + FIT_SLACK) fit++;
       if (fit > from) {
         shelfY = y;
-        place(0, y, fit, head + sum(s.rowH, from, fit));
+        place(0, y, fit, head + sum(s, from, fit));
+        if (over) return null;
         newSheet();
         continue;
       }
@@ -102,11 +128,22 @@ export function planSections(job: Job, area: Box, legendExtra: number): SectionP
     if (base === null) continue;
     const count = base.length;
     // The legend on the earliest sheet that can take it at no cost, else after the diagram.
+    // The first few sheets are tried by packing again (the legend may push a section on and
+    // still keep the count); past those only a sheet whose content already leaves the room,
+    // which packs exactly as before, so a job of thousands of sheets is not packed thousands of
+    // times.
     let legendSheet: number | null = null;
     let best = base;
+    const baseSplits = splits(base);
     for (let k = 0; k < count; k++) {
-      const p = pack(sections, area.w, (i) => (i === k ? area.h - legendExtra : area.h));
-      if (p !== null && p.length === count && splits(p) <= splits(base)) {
+      const short = area.h - legendExtra;
+      if (used(base[k] ?? []) <= short + FIT_SLACK) {
+        legendSheet = k;
+        break;
+      }
+      if (k >= LEGEND_REPACKS) continue;
+      const p = pack(sections, area.w, (i) => (i === k ? short : area.h), { sheets: count, splits: baseSplits });
+      if (p !== null && p.length === count && splits(p) <= baseSplits) {
         legendSheet = k;
         best = p;
         break;
@@ -117,7 +154,7 @@ export function planSections(job: Job, area: Box, legendExtra: number): SectionP
     const limitSplits = splits(best);
     const floor = Math.max(...sections.map((s) => headHeight(s, true)));
     for (let limit = Math.max(...best.map(used)) - BALANCE_STEP; limit >= floor; limit -= BALANCE_STEP) {
-      const p = pack(sections, area.w, (i) => Math.min(limit, room(i)));
+      const p = pack(sections, area.w, (i) => Math.min(limit, room(i)), { sheets: count, splits: limitSplits });
       if (p === null || p.length !== count || splits(p) > limitSplits) continue;
       best = p;
     }

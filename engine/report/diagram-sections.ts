@@ -143,12 +143,16 @@ export function buildSections(job: Job, area: Box, inline: boolean): Section[] |
   const one = (root: string, fedBy: Link | null, join: boolean): Made | false | 'apart' => {
     const spine: Array<{ id: string; link: Link | null }> = [{ id: root, link: null }];
     let end = root;
+    // A spine whose head alone is taller than the area is split whatever hangs below it; stop
+    // there rather than walk on down a chain of boards (walking it from every board is quadratic).
+    const tallest = Math.floor((area.h - (fedBy !== null ? FED_H : 4) - Math.min(BUS, NODE_BOTTOM)) / LEVEL) + 1;
     for (;;) {
       const k = children(end);
       const only = k[0];
       if (!join || k.length !== 1 || only === undefined || !isBoard(only.to)) break;
       spine.push({ id: only.to, link: only });
       end = only.to;
+      if (spine.length > tallest + 1) return 'apart';
     }
     const cols = children(end).map(column);
     if (cols.some((c) => c.slots > maxCols)) return false;
