@@ -357,7 +357,11 @@ export function diagramContext(job: Job, results: Results, plan: DiagramPlan, sh
   const path = results.worst?.path ?? [];
   path.forEach((id, i) => (i % 2 === 1 ? worstLinks : worstNodes).add(id));
   const children = new Map<string, Link[]>();
-  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l]);
+  for (const l of job.links) {
+    const list = children.get(l.from);
+    if (list !== undefined) list.push(l);
+    else children.set(l.from, [l]);
+  }
   // A link's fault level is at its origin: the fault level of the node it leaves.
   const faultAt = new Map<string, number | null>();
   for (const c of results.circuits) if (c.faultLevel !== null && !faultAt.has(c.from)) faultAt.set(c.from, c.faultLevel);

@@ -60,16 +60,25 @@ const COLUMNS: Column[] = [
 ];
 
 /** The board or supply a link's circuit is tested from: its origin, or the board above a point it leaves. */
-function boardOf(job: Job, link: Link, nodes: Map<string, JobNode>, feeder: Map<string, Link>): string {
+function boardOf(link: Link, nodes: Map<string, JobNode>, feeder: Map<string, Link>, memo: Map<string, string>): string {
+  // Up through the points to the board, remembering the answer for every point passed, so a
+  // chain of points is walked once in all rather than once per circuit.
+  const passed: string[] = [];
   let id = link.from;
+  let found: string | undefined;
   const seen = new Set<string>();
   while (nodes.get(id)?.kind === 'point' && !seen.has(id)) {
+    found = memo.get(id);
+    if (found !== undefined) break;
     seen.add(id);
+    passed.push(id);
     const up = feeder.get(id);
     if (up === undefined) break;
     id = up.from;
   }
-  return id;
+  const board = found ?? id;
+  for (const p of passed) memo.set(p, board);
+  return board;
 }
 
 /** The method of correction in words, and the supply's measured Ze where it is used. */
@@ -132,11 +141,14 @@ export function testSheetPages(job: Job, results: Results, rules: ResolvedRules,
   const feeder = new Map(job.links.map((l) => [l.to, l] as const));
   const links = new Map(job.links.map((l) => [l.id, l] as const));
   const byBoard = new Map<string, CircuitResult[]>();
+  const memo = new Map<string, string>();
   for (const c of results.circuits) {
     const link = links.get(c.link);
     if (link === undefined) continue;
-    const board = boardOf(job, link, nodes, feeder);
-    byBoard.set(board, [...(byBoard.get(board) ?? []), c]);
+    const board = boardOf(link, nodes, feeder, memo);
+    const list = byBoard.get(board);
+    if (list !== undefined) list.push(c);
+    else byBoard.set(board, [c]);
   }
   // Boards in file order (supplies first when they come first), each with its circuits in file order.
   const order = job.nodes.filter((n) => byBoard.has(n.id)).map((n) => n.id);

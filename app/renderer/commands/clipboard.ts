@@ -14,7 +14,11 @@ export interface Clip {
 /** The selected nodes with everything below them, the selected links with what they feed. */
 export function collectSubtree(job: Job, sel: { nodes: string[]; links: string[] }): Clip {
   const children = new Map<string, Link[]>();
-  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l]);
+  for (const l of job.links) {
+    const list = children.get(l.from);
+    if (list !== undefined) list.push(l);
+    else children.set(l.from, [l]);
+  }
   const nodeIds = new Set<string>();
   const linkIds = new Set<string>(sel.links);
   const stack = [...sel.nodes, ...job.links.filter((l) => linkIds.has(l.id)).map((l) => l.to)];

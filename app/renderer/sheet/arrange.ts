@@ -71,7 +71,11 @@ export async function positionsForMissing(job: Job): Promise<Array<{ id: string;
  */
 function centreParents(job: Job, slots: Map<string, { x: number; y: number; w: number; h: number }>): void {
   const children = new Map<string, string[]>();
-  for (const l of job.links) children.set(l.from, [...(children.get(l.from) ?? []), l.to]);
+  for (const l of job.links) {
+    const list = children.get(l.from);
+    if (list !== undefined) list.push(l.to);
+    else children.set(l.from, [l.to]);
+  }
   const order = [...slots.keys()].sort((a, b) => slots.get(b)!.y - slots.get(a)!.y);
   const gap = 24;
   for (const id of order) {
