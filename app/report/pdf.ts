@@ -24,32 +24,63 @@ export function documentDate(job: Job): Date {
   return new Date(Date.UTC(2000, 0, 1));
 }
 
-function applyStroke(doc: PDFKit.PDFDocument, s: Stroke): void {
-  doc.lineWidth(s.width).strokeColor(s.color).lineCap('round').lineJoin('round');
-  if (s.dash !== undefined) doc.dash(s.dash[0], { space: s.dash[1] });
-  else doc.undash();
+/** The graphics state last written on the current page, so an operator that would set what is
+ *  already set is not written again (a large printout has millions of items). */
+interface Pen {
+  width: number | null;
+  stroke: string | null;
+  dash: string | null;
+  fill: string | null;
 }
 
-function paint(doc: PDFKit.PDFDocument, stroke: Stroke | undefined, fill: string | undefined): void {
-  if (stroke !== undefined) applyStroke(doc, stroke);
-  if (fill !== undefined && stroke !== undefined) doc.fillAndStroke(fill, stroke.color);
-  else if (fill !== undefined) doc.fill(fill);
+function freshPen(): Pen {
+  return { width: null, stroke: null, dash: null, fill: null };
+}
+
+function applyStroke(doc: PDFKit.PDFDocument, pen: Pen, s: Stroke): void {
+  if (pen.width !== s.width) {
+    doc.lineWidth(s.width);
+    pen.width = s.width;
+  }
+  if (pen.stroke !== s.color) {
+    doc.strokeColor(s.color);
+    pen.stroke = s.color;
+  }
+  const dash = s.dash === undefined ? '' : `${s.dash[0]} ${s.dash[1]}`;
+  if (pen.dash !== dash) {
+    if (s.dash !== undefined) doc.dash(s.dash[0], { space: s.dash[1] });
+    else doc.undash();
+    pen.dash = dash;
+  }
+}
+
+function setFill(doc: PDFKit.PDFDocument, pen: Pen, color: string): void {
+  if (pen.fill === color) return;
+  doc.fillColor(color);
+  pen.fill = color;
+}
+
+function paint(doc: PDFKit.PDFDocument, pen: Pen, stroke: Stroke | undefined, fill: string | undefined): void {
+  if (stroke !== undefined) applyStroke(doc, pen, stroke);
+  if (fill !== undefined) setFill(doc, pen, fill);
+  if (fill !== undefined && stroke !== undefined) doc.fillAndStroke();
+  else if (fill !== undefined) doc.fill();
   else if (stroke !== undefined) doc.stroke();
 }
 
-function drawItem(doc: PDFKit.PDFDocument, item: Item): void {
+function drawItem(doc: PDFKit.PDFDocument, pen: Pen, item: Item): void {
   switch (item.kind) {
     case 'line':
-      applyStroke(doc, item.stroke);
+      applyStroke(doc, pen, item.stroke);
       doc.moveTo(item.x1, item.y1).lineTo(item.x2, item.y2).stroke();
       return;
     case 'rect':
       doc.rect(item.x, item.y, item.w, item.h);
-      paint(doc, item.stroke, item.fill);
+      paint(doc, pen, item.stroke, item.fill);
       return;
     case 'circle':
       doc.circle(item.cx, item.cy, item.r);
-      paint(doc, item.stroke, item.fill);
+      paint(doc, pen, item.stroke, item.fill);
       return;
     case 'polyline': {
       const [first, ...rest] = item.points;
@@ -57,13 +88,14 @@ function drawItem(doc: PDFKit.PDFDocument, item: Item): void {
       doc.moveTo(first[0], first[1]);
       for (const [x, y] of rest) doc.lineTo(x, y);
       if (item.closed === true) doc.closePath();
-      paint(doc, item.stroke, item.fill);
+      paint(doc, pen, item.stroke, item.fill);
       return;
     }
     case 'text': {
       const shown = plainText(item.text); // no control characters in the PDF (sanitise.ts)
       if (shown === '') return;
-      doc.font(item.font === 'bold' ? 'LW-Bold' : 'LW-Regular').fontSize(item.size).fillColor(item.color ?? '#000000');
+      doc.font(item.font === 'bold' ? 'LW-Bold' : 'LW-Regular').fontSize(item.size);
+      setFill(doc, pen, item.color ?? '#000000');
       const width = item.anchor === 'start' ? 0 : doc.widthOfString(shown);
       const x = item.anchor === 'start' ? item.x : item.anchor === 'middle' ? item.x - width / 2 : item.x - width;
       doc.text(shown, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
@@ -101,7 +133,10 @@ export function sheetsToPdf(sheets: Sheet[], meta: { title: string; subject: str
     doc.addPage({ size: [sheet.widthMm * PT_PER_MM, sheet.heightMm * PT_PER_MM], margin: 0 });
     doc.save();
     doc.scale(PT_PER_MM);
-    for (const item of sheet.items) drawItem(doc, item);
+    // Every line on the sheets has round caps and joins: set once a page.
+    doc.lineCap('round').lineJoin('round');
+    const pen = freshPen();
+    for (const item of sheet.items) drawItem(doc, pen, item);
     doc.restore();
   }
   doc.end();
