@@ -81,15 +81,16 @@ function findSize(x: FixInputs): Fix | null {
   const dropBase = dropApplies ? result.voltageDropTotal! - result.voltageDrop! : 0;
   for (const a of STANDARD_SIZES) {
     if (a < cable.active - 1e-9) continue;
+    // The drop depends on the active size alone: a size that fails it fails with every earth.
+    if (dropApplies) {
+      const vd = linkVoltageDrop(link, a, result.phases, x.ib!, x.pf!, rules);
+      if (!atMost(dropBase + vd, result.voltageDropLimit!)) continue;
+    }
     for (const e of STANDARD_SIZES) {
       if (e < cable.earth - 1e-9 || e > Math.max(a, cable.earth) + 1e-9) continue;
       if (loopApplies) {
         const perMetre = impedancePerMetre({ ...cable, active: a, earth: e }, rules);
         if (!atMost(ratioWith(x, perMetre, facts.budget!), 1)) continue;
-      }
-      if (dropApplies) {
-        const vd = linkVoltageDrop(link, a, result.phases, x.ib!, x.pf!, rules);
-        if (!atMost(dropBase + vd, result.voltageDropLimit!)) continue;
       }
       return { kind: 'size', active: a, earth: e };
     }
