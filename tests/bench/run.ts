@@ -17,12 +17,15 @@
 // a target or the browser benchmark flags one.
 //
 // Records (not targets): a chain of 50,000 boards and one board with 90,000 circuits, both
-// within the element limit; their load and analyse times. Then the command's start-up
+// within the element limit; their load and analyse times. The printout's layout (every sheet's
+// display list, before SVG or PDF) of a chain and of one wide board at two sizes, n and 4n, with
+// the growth: the time at 4n over 4 times the time at n (about 1 when the layout is linear). Then the command's start-up
 // (`node bin/loopwright.mjs --help`, median of 7; target well under half a second).
 
 import * as engine from '../../engine/index.js';
 import type { Job, Results } from '../../engine/index.js';
 import { analyse, parseJob, serialiseJob } from '../../engine/index.js';
+import { layoutReport } from '../../engine/report/index.js';
 import { generateChain, generateJob, generateWideBoard } from './generate.js';
 
 const SIZES = [100, 1_000, 10_000];
@@ -209,6 +212,32 @@ if (records) {
       console.log(
         `  ${name.padEnd(32)} ${String(r.nodes).padStart(6)} nodes ${String(r.links).padStart(6)} links ${(r.fileBytes / 1024 / 1024).toFixed(1).padStart(5)} MiB   ` +
           `JSON.parse ${fmt(r.jsonParseMs, 0).padStart(5)} ms   load ${fmt(r.loadMs, 0).padStart(6)} ms   analyse ${fmt(r.analyseMs, 0).padStart(6)} ms${r.problem !== null ? `   ${r.problem}` : ''}`,
+      );
+  }
+}
+
+if (records) {
+  // The printout's layout at n and 4n: linear when the growth is about 1 (quadratic gives 4).
+  if (!json) console.log('\nprintout layout (display lists of every sheet), timed once each:');
+  for (const [name, make, n] of [
+    ['chain of boards', generateChain, 2_500],
+    ['one wide board', generateWideBoard, 5_000],
+  ] as const) {
+    const time = (size: number): { ms: number; sheets: number } => {
+      const job = make(size);
+      const results = analyse(job);
+      const start = performance.now();
+      const sheets = layoutReport(job, results).length;
+      return { ms: Number((performance.now() - start).toPrecision(4)), sheets };
+    };
+    const small = time(n);
+    const large = time(4 * n);
+    const growth = Number((large.ms / (4 * small.ms)).toPrecision(3));
+    if (json) console.log(JSON.stringify({ record: `printout layout, ${name}`, n, layoutMs: small.ms, sheets: small.sheets, n4: 4 * n, layoutMs4: large.ms, sheets4: large.sheets, growth }));
+    else
+      console.log(
+        `  ${name.padEnd(18)} ${String(n).padStart(6)}: ${small.ms.toFixed(0).padStart(6)} ms ${String(small.sheets).padStart(5)} sheets   ` +
+          `${String(4 * n).padStart(6)}: ${large.ms.toFixed(0).padStart(6)} ms ${String(large.sheets).padStart(5)} sheets   growth ${growth.toFixed(2)} (linear ≈ 1, quadratic ≈ 4)`,
       );
   }
 }
