@@ -44,6 +44,8 @@ if (!existsSync(bundle)) {
   if (failure !== null) giveUp(`the command-line bundle ${bundle} is missing (${failure}); ${HOW}`);
 }
 
+// The usage lines then name this command rather than the npm script (app/cli/help.ts).
+globalThis.__loopwrightBin = true;
 try {
   await import(pathToFileURL(bundle).href);
 } catch (error) {

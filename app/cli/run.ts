@@ -4,7 +4,7 @@
 import { parseArgs } from './args.js';
 import { EXIT, type Output } from './command.js';
 import { COMMANDS } from './commands/index.js';
-import { commandHelp, generalHelp, RUN } from './help.js';
+import { commandHelp, generalHelp, runPrefix } from './help.js';
 
 export async function runCli(argv: readonly string[], io: Output): Promise<number> {
   const [first, ...rest] = argv;
@@ -25,12 +25,12 @@ export async function runCli(argv: readonly string[], io: Output): Promise<numbe
 
   const command = Object.hasOwn(COMMANDS, first) ? COMMANDS[first] : undefined;
   if (command === undefined) {
-    io.err(`unknown command "${first}"; commands: ${Object.keys(COMMANDS).join(', ')}, help. Try \`${RUN} --help\`.\n`);
+    io.err(`unknown command "${first}"; commands: ${Object.keys(COMMANDS).join(', ')}, help. Try \`${runPrefix()} --help\`.\n`);
     return EXIT.unusable;
   }
   const parsed = parseArgs(rest, command.options);
   if (!parsed.ok) {
-    io.err(`${first}: ${parsed.message}. Usage: ${RUN} ${command.usage}\n`);
+    io.err(`${first}: ${parsed.message}. Usage: ${runPrefix()} ${command.usage}\n`);
     return EXIT.unusable;
   }
   if (parsed.args.help) {
@@ -41,7 +41,7 @@ export async function runCli(argv: readonly string[], io: Output): Promise<numbe
   const { min, max } = command.positionals;
   if (count < min || count > max) {
     const what = count < min ? 'missing argument' : `unexpected argument "${parsed.args.positionals[max] ?? ''}"`;
-    io.err(`${first}: ${what}. Usage: ${RUN} ${command.usage}\n`);
+    io.err(`${first}: ${what}. Usage: ${runPrefix()} ${command.usage}\n`);
     return EXIT.unusable;
   }
   return command.run({ args: parsed.args, ...io });

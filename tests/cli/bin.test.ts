@@ -109,14 +109,22 @@ describe('the bundle', () => {
 });
 
 describe('loopwright, the installed command', () => {
-  it('--help prints the general help, as `npm run cli -- --help` does, and exits 0', () => {
+  it('--help prints the general help, as `npm run cli -- --help` does but naming itself, and exits 0', () => {
     const help = loopwright('--help');
     expect(help.status).toBe(0);
     expect(help.stderr).toBe('');
     expect(help.stdout).toMatch(/^Loopwright command line/);
     for (const command of ['check', 'demo', 'report']) expect(help.stdout).toContain(`\n  ${command} `);
+    expect(help.stdout).toContain('Usage: loopwright COMMAND [ARGUMENTS] [OPTIONS]');
+    expect(help.stdout).toContain('Run `loopwright COMMAND --help`');
+    expect(help.stdout).not.toContain('npm run');
     const fromSource = cli('--help');
-    expect(help.stdout).toBe(fromSource.stdout);
+    expect(fromSource.stdout).toContain('Usage: npm run --silent cli -- COMMAND');
+    expect(help.stdout).toBe(fromSource.stdout.replaceAll('npm run --silent cli --', 'loopwright'));
+    // The usage line of a misused command names the command that was run.
+    const misused = loopwright('check');
+    expect(misused.status).toBe(2);
+    expect(misused.stderr).toContain('Usage: loopwright check');
   });
 
   it('check --json prints the same results document as the source and as analyse in-process', () => {

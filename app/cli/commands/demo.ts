@@ -75,7 +75,8 @@ export const demo: Command = {
   details: [
     'The demo is an invented boat-repair yard: a main switchboard, two distribution boards',
     'and their final subcircuits, with one circuit that fails and one that relies on an RCD.',
-    'Save it with `npm run --silent cli -- demo > my.lwj`, then `check my.lwj`.',
+    'Save it with `loopwright demo > my.lwj` (or `npm run --silent cli -- demo > my.lwj` in the',
+    'project folder), then `check my.lwj`.',
   ],
   options,
   positionals: { min: 0, max: 0 },

@@ -11,6 +11,7 @@ import { EXIT, type Command } from '../command.js';
 import { loadJobFile, writeOutputFile } from '../io.js';
 import { exitFor } from './check.js';
 import { summaryLine } from '../format.js';
+import { runPrefix } from '../help.js';
 
 const options: OptionSpec[] = [
   { name: 'output', short: 'o', value: 'OUT.pdf', summary: 'the PDF file to write (required)' },
@@ -77,7 +78,7 @@ export const report: Command = {
     const input = args.positionals[0] ?? '';
     const output = args.options.output;
     if (typeof output !== 'string' || output === '') {
-      err(`report: missing -o OUT.pdf. Usage: npm run --silent cli -- ${USAGE}\n`);
+      err(`report: missing -o OUT.pdf. Usage: ${runPrefix()} ${USAGE}\n`);
       return EXIT.unusable;
     }
     if (samePath(input, output) || output.toLowerCase().endsWith('.lwj')) {
