@@ -1,5 +1,6 @@
 // The "From" of a link as a choice of feeding part, so a circuit moves to another board without
 // being redrawn. A choice that would loop is refused beside the field, with the reason.
+import { useMemo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import type { Link } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
@@ -7,13 +8,15 @@ import { moveFeed } from '../commands/wiring.js';
 import { SelectField } from '../panels/fields/fields.js';
 
 const ORDER = { supply: 0, board: 1, point: 2 } as const;
+/** One collator for every comparison (localeCompare with options builds one per call). */
+const IDS = new Intl.Collator(undefined, { numeric: true });
 
 /** Every part that could be chosen to feed `to`: supplies, boards, then points, each with its name. */
 export function feedOptions(nodes: ReadonlyArray<{ id: string; kind: 'supply' | 'board' | 'point'; name?: string }>, to: string) {
   return nodes
     .filter((n) => n.id !== to)
     .slice()
-    .sort((a, b) => ORDER[a.kind] - ORDER[b.kind] || a.id.localeCompare(b.id, undefined, { numeric: true }))
+    .sort((a, b) => ORDER[a.kind] - ORDER[b.kind] || IDS.compare(a.id, b.id))
     .map((n) => ({ value: n.id, label: `${n.id}${n.name ? ` — ${n.name}` : ''} (${n.kind})` }));
 }
 
@@ -21,17 +24,27 @@ export function FeedPicker({ link }: { link: Link }) {
   // Ids, kinds and names only: a drag or a cable edit does not re-render the list.
   const parts = useEditor(useShallow((s) => s.job.nodes.map((n) => `${n.kind}\u0000${n.id}\u0000${n.name ?? ''}`)));
   const toName = useEditor((s) => s.job.nodes.find((n) => n.id === link.to)?.name);
-  const nodes = parts.map((p) => {
+  // Worked out again only when a part is added, removed or renamed, or another link is shown
+  // (thousands of options: not re-sorted, nor re-rendered, on every edit of this link's cable).
+  const nodes = useMemo(() => parts.map((p) => {
     const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
     return { id, kind, ...(name ? { name } : {}) };
-  });
-  const options = feedOptions(nodes, link.to);
-  if (!nodes.some((n) => n.id === link.from)) options.unshift({ value: link.from, label: `${link.from} (not in the job)` });
+  }), [parts]);
+  const options = useMemo(() => {
+    const list = feedOptions(nodes, link.to);
+    if (!nodes.some((n) => n.id === link.from)) list.unshift({ value: link.from, label: `${link.from} (not in the job)` });
+    return list;
+  }, [nodes, link.to, link.from]);
+  const id = link.id;
+  const from = link.from;
+  const field = useMemo(() => (
+    <SelectField field="from" label="From (fed by)" value={from} options={options}
+      hint="Choose another board or point to move this circuit; nothing is redrawn."
+      onCommit={(to) => moveFeed(id, to)} />
+  ), [from, options, id]);
   return (
     <>
-      <SelectField field="from" label="From (fed by)" value={link.from} options={options}
-        hint="Choose another board or point to move this circuit; nothing is redrawn."
-        onCommit={(from) => moveFeed(link.id, from)} />
+      {field}
       <div className="lwp-field lwp-readout">
         <span className="lwp-label">To</span>
         <span className="lwp-readout-value" data-field-to>{link.to}{toName ? ` (${toName})` : ''}</span>

@@ -338,11 +338,15 @@ export function Sheet({ onContextMenu }: SheetProps) {
     }).filter((r) => r.right > r.left);
     setCorner(mapCorner(box, drawn));
   }, []);
+  // A large job draws no minimap: nothing to place (measuring every label would cost an edit).
   useEffect(() => {
+    if (large) return;
     const frame = requestAnimationFrame(placeMap);
     return () => cancelAnimationFrame(frame);
-  }, [placeMap, searchable, resultById, documentSeq]);
-  const onMoveEnd = useCallback(() => placeMap(), [placeMap]);
+  }, [placeMap, searchable, resultById, documentSeq, large]);
+  const onMoveEnd = useCallback(() => {
+    if (!large) placeMap();
+  }, [placeMap, large]);
   return (
     <div className="lw-sheet-frame">
     <div className="lw-sheet" ref={wrapper} onFocusCapture={onFocusCapture} onMouseMove={onMouseMove} onMouseLeave={onMouseLeave} onDragOver={onDragOver} onDrop={onDrop} data-sheet>

@@ -2,7 +2,7 @@
 // `onCommit` that returns the store's outcome; when the edit is refused (locally or by the
 // store), the reason is shown beside the field (role=alert) and the last good value comes back.
 
-import { useEffect, useId, useRef, useState, type ReactNode, type RefObject } from 'react';
+import { memo, useEffect, useId, useRef, useState, type ReactNode, type RefObject } from 'react';
 import { parseNumber, showNumber, type NumberRule } from './parse.js';
 import { useEditor } from '../../store/editor.js';
 import { practiceWarning } from '../../store/practice.js';
@@ -133,7 +133,7 @@ export interface NumberFieldProps extends Common, NumberRule {
   list?: string;
 }
 
-export function NumberField(props: NumberFieldProps) {
+function NumberFieldView(props: NumberFieldProps) {
   const { field, label, unit, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const shown = showNumber(value, props.scale);
@@ -187,7 +187,7 @@ export interface TextFieldProps extends Common {
   placeholder?: string;
 }
 
-export function TextField(props: TextFieldProps) {
+function TextFieldView(props: TextFieldProps) {
   const { field, label, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const { text, setText, error, run, revert, anchor } = useTextCommit(value ?? '', (t) =>
@@ -229,7 +229,7 @@ export interface SelectFieldProps<T extends string> extends Common {
   onCommit(value: T): Outcome;
 }
 
-export function SelectField<T extends string>(props: SelectFieldProps<T>) {
+function SelectFieldView<T extends string>(props: SelectFieldProps<T>) {
   const { field, label, value, options, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const [error, setError] = useState<string | null>(null);
@@ -267,7 +267,7 @@ export interface CheckFieldProps extends Common {
   onCommit(value: boolean): Outcome;
 }
 
-export function CheckField(props: CheckFieldProps) {
+function CheckFieldView(props: CheckFieldProps) {
   const { field, label, value, onCommit, attr = 'data-field' } = props;
   const inputId = useId();
   const [error, setError] = useState<string | null>(null);
@@ -296,6 +296,42 @@ export function CheckField(props: CheckFieldProps) {
     </div>
   );
 }
+
+/**
+ * A field that renders again only when a value it shows changes. The panels hand every field a
+ * fresh `onCommit` closure on each render; each function prop is passed on as a stable one that
+ * calls the latest, so a panel re-rendered by an edit elsewhere (a length typed into the next
+ * field, a drag on the sheet) does not re-render its other fields.
+ */
+function stableField<P extends object>(View: (props: P) => ReactNode): (props: P) => ReactNode {
+  const Memo = memo(View as (props: P) => ReactNode) as unknown as (props: P) => ReactNode;
+  function Field(props: P) {
+    const latest = useRef(props);
+    latest.current = props;
+    const stable = useRef(new Map<string, (...args: unknown[]) => unknown>());
+    const passed: Record<string, unknown> = {};
+    for (const [key, value] of Object.entries(props)) {
+      if (typeof value !== 'function') {
+        passed[key] = value;
+        continue;
+      }
+      let call = stable.current.get(key);
+      if (call === undefined) {
+        call = (...args: unknown[]) => (latest.current as Record<string, (...a: unknown[]) => unknown>)[key]!(...args);
+        stable.current.set(key, call);
+      }
+      passed[key] = call;
+    }
+    return <Memo {...(passed as P)} />;
+  }
+  Field.displayName = View.name.replace(/View$/, '');
+  return Field;
+}
+
+export const NumberField = stableField(NumberFieldView);
+export const TextField = stableField(TextFieldView);
+export const SelectField = stableField(SelectFieldView) as <T extends string>(props: SelectFieldProps<T>) => ReactNode;
+export const CheckField = stableField(CheckFieldView);
 
 /** A read-only value in the same layout as the fields. */
 export function Readout({ label, children }: { label: string; children: ReactNode }) {
