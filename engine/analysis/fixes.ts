@@ -8,8 +8,7 @@ import type { Curve, Link } from '../model/types.js';
 import { STANDARD_SIZES } from '../model/sizes.js';
 import type { ResolvedRules } from './basis.js';
 import type { LoopFacts } from './check.js';
-import { magnitude } from './complex.js';
-import { impedancePerMetre } from './impedance.js';
+import { abs } from './complex.js';
 import type { CircuitResult, Fix } from './results.js';
 import { atMost } from './tolerance.js';
 import { linkVoltageDrop } from './voltage-drop.js';
@@ -32,17 +31,22 @@ export interface FixInputs {
   pf: number | null;
 }
 
-/** The loop ratio of this link with its loop before it and a new per-metre impedance. */
-function ratioWith(x: FixInputs, perMetre: { re: number; im: number }, budget: number): number {
-  const { facts, result, rules, link } = x;
+/**
+ * Whether the loop passes with this link's cable at a candidate size, given its impedance per
+ * metre: impedancePerMetre's and the loop check's arithmetic written out, with no objects (a job
+ * whose circuits mostly fail asks this many times for each of them).
+ */
+function candidatePasses(x: FixInputs, rePerMetre: number, imPerMetre: number): boolean {
+  const { facts, result, rules } = x;
   const before = facts.before!;
-  const l = link.cable.length;
-  const z = magnitude({ re: before.re + perMetre.re * l, im: before.im + perMetre.im * l });
-  if (facts.ze) return z / budget;
-  const s = rules.unknownSourceShare.value;
-  const up = (1 - s) * budget;
+  const l = x.link.cable.length;
+  const z = abs(before.re + rePerMetre * l, before.im + imPerMetre * l);
+  const budget = facts.budget!;
+  if (facts.ze) return atMost(z / budget, 1);
+  const share = rules.unknownSourceShare.value;
+  const up = (1 - share) * budget;
   const upRatio = up > 0 ? result.upstream! / up : result.upstream! > 0 ? Number.MAX_VALUE : 0;
-  return Math.max(z / (s * budget), upRatio);
+  return atMost(Math.max(z / (share * budget), upRatio), 1);
 }
 
 export function findFixes(x: FixInputs): Fix[] {
@@ -79,6 +83,10 @@ function findSize(x: FixInputs): Fix | null {
   if (loopApplies && (facts.budget === null || facts.before === null)) return null;
   const dropApplies = result.voltageStatus !== 'unchecked';
   const dropBase = dropApplies ? result.voltageDropTotal! - result.voltageDrop! : 0;
+  const rhoActive = rules.resistivity[cable.material].value;
+  const rhoEarth = rules.resistivity[cable.earthMaterial ?? cable.material].value;
+  const n = cable.parallel ?? 1;
+  const imPerMetre = (2 * (cable.reactance ?? rules.reactance.value)) / n;
   for (const a of STANDARD_SIZES) {
     if (a < cable.active - 1e-9) continue;
     // The drop depends on the active size alone: a size that fails it fails with every earth.
@@ -86,13 +94,23 @@ function findSize(x: FixInputs): Fix | null {
       const vd = linkVoltageDrop(link, a, result.phases, x.ib!, x.pf!, rules);
       if (!atMost(dropBase + vd, result.voltageDropLimit!)) continue;
     }
-    for (const e of STANDARD_SIZES) {
-      if (e < cable.earth - 1e-9 || e > Math.max(a, cable.earth) + 1e-9) continue;
-      if (loopApplies) {
-        const perMetre = impedancePerMetre({ ...cable, active: a, earth: e }, rules);
-        if (!atMost(ratioWith(x, perMetre, facts.budget!), 1)) continue;
-      }
-      return { kind: 'size', active: a, earth: e };
+    // The earths allowed with this active: from the present earth up to the larger of the two.
+    const top = Math.max(a, cable.earth) + 1e-9;
+    let first = -1;
+    let last = -1;
+    for (let k = 0; k < STANDARD_SIZES.length; k++) {
+      const e = STANDARD_SIZES[k]!;
+      if (e < cable.earth - 1e-9 || e > top) continue;
+      if (first < 0) first = k;
+      last = k;
+    }
+    if (first < 0) continue;
+    if (!loopApplies) return { kind: 'size', active: a, earth: STANDARD_SIZES[first]! };
+    // A larger earth only lowers the loop: when the largest allowed fails, every one does.
+    if (!candidatePasses(x, (rhoActive / a + rhoEarth / STANDARD_SIZES[last]!) / n, imPerMetre)) continue;
+    for (let k = first; k <= last; k++) {
+      const e = STANDARD_SIZES[k]!;
+      if (candidatePasses(x, (rhoActive / a + rhoEarth / e) / n, imPerMetre)) return { kind: 'size', active: a, earth: e };
     }
   }
   return null;
