@@ -34,6 +34,23 @@ export interface Ctx {
   supplies: Map<string, SupplyResult>;
   /** Sheet number of diagram tile i. */
   sheetOf: (tile: number) => number;
+  /** The links with an end on each tile, in file order (worked out on the first tile drawn). */
+  tileLinks?: Link[][];
+}
+
+/** The links touching tile `index`: one pass over the links for all tiles, not one per tile. */
+function linksOnTile(ctx: Ctx, index: number): readonly Link[] {
+  if (ctx.tileLinks === undefined) {
+    const lists: Link[][] = ctx.plan.tiles.map(() => []);
+    for (const link of ctx.job.links) {
+      const from = ctx.plan.tileOf.get(link.from);
+      const to = ctx.plan.tileOf.get(link.to);
+      if (from !== undefined) lists[from]?.push(link);
+      if (to !== undefined && to !== from) lists[to]?.push(link);
+    }
+    ctx.tileLinks = lists;
+  }
+  return ctx.tileLinks[index] ?? [];
 }
 
 export function linkStroke(ctx: Ctx, link: Link): Stroke {
@@ -264,7 +281,7 @@ export function drawTile(ctx: Ctx, index: number): Item[] {
     band.set(key, entry);
   };
 
-  for (const link of ctx.job.links) {
+  for (const link of linksOnTile(ctx, index)) {
     const pIn = here(link.from);
     const cIn = here(link.to);
     if (!pIn && !cIn) continue;

@@ -69,6 +69,9 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
     : undefined, results);
   const legendSheetNo = sections === null ? 0 : sections.legendSheet !== null ? sections.legendSheet + 1 : count + schedule.length + assumptions.length;
 
+  // The full legend on a tiled diagram is the same on every tile: laid out once (the items are
+  // never changed afterwards, so the sheets share them).
+  let tileLegend: Item[] | null = null;
   for (let t = 0; t < count; t++) {
     let items: Item[];
     let what = '';
@@ -82,7 +85,8 @@ export function layoutReport(job: Job, results: Results, options: ReportOptions 
       if (plan.tiles.length === 0) {
         items = [text(area.x + area.w / 2, area.y + area.h / 2, 'The job has no nodes to draw.', 4, 'bold', 'middle', GREY)];
       } else items = drawTile(ctx, t);
-      items.push(...legend(legendBox(legendTop), notes).items);
+      tileLegend ??= legend(legendBox(legendTop), notes).items;
+      items.push(...tileLegend);
     }
     pages.push({ kind: 'diagram', title: count > 1 ? `Single-line diagram, part ${t + 1} of ${count}${what}` : 'Single-line diagram', items });
   }

@@ -87,6 +87,22 @@ export function generateChain(boards: number): Job {
   return job;
 }
 
+/** One board feeding a chain of `points` points, each fed from the one before (invented data):
+ *  a tree as deep as the chain of boards, but with no board to split the printout by. */
+export function generatePointChain(points: number): Job {
+  const job = generateChain(1);
+  job.job.title = `Generated chain of ${points} points`;
+  job.nodes = job.nodes.filter((n) => n.kind !== 'point');
+  job.links = job.links.filter((l) => l.to !== 'P1');
+  let from = 'B1';
+  for (let i = 1; i <= points; i++) {
+    job.nodes.push({ id: `P${i}`, kind: 'point', name: `Point ${i}`, use: 'other', at: { x: (i % 7) * 50, y: 320 + i * 120 } });
+    job.links.push({ id: `C${i}`, from, to: `P${i}`, cable: { length: 0.2, material: 'Cu', active: 2.5, earth: 2.5 }, device: { type: 'mcb', curve: 'C', rating: 16 } });
+    from = `P${i}`;
+  }
+  return job;
+}
+
 /** One board with `circuits` final subcircuits on it (invented data): the widest tree. */
 export function generateWideBoard(circuits: number): Job {
   const job = generateJob(circuits, 1);

@@ -18,7 +18,7 @@
 //
 // Records (not targets): a chain of 50,000 boards and one board with 90,000 circuits, both
 // within the element limit; their load and analyse times. The printout's layout (every sheet's
-// display list, before SVG or PDF) of a chain and of one wide board at two sizes, n and 4n, with
+// display list, before SVG or PDF) of a chain of boards, a chain of points and one wide board at two sizes, n and 4n, with
 // the growth: the time at 4n over 4 times the time at n (about 1 when the layout is linear). Then the command's start-up
 // (`node bin/loopwright.mjs --help`, median of 7; target well under half a second).
 
@@ -26,7 +26,7 @@ import * as engine from '../../engine/index.js';
 import type { Job, Results } from '../../engine/index.js';
 import { analyse, parseJob, serialiseJob } from '../../engine/index.js';
 import { layoutReport } from '../../engine/report/index.js';
-import { generateChain, generateJob, generateWideBoard } from './generate.js';
+import { generateChain, generateJob, generatePointChain, generateWideBoard } from './generate.js';
 
 const SIZES = [100, 1_000, 10_000];
 const TARGETS = { load: 1.5, analyse: 1, reanalyse: 1 / 20 };
@@ -221,6 +221,7 @@ if (records) {
   if (!json) console.log('\nprintout layout (display lists of every sheet), timed once each:');
   for (const [name, make, n] of [
     ['chain of boards', generateChain, 2_500],
+    ['chain of points', generatePointChain, 1_500],
     ['one wide board', generateWideBoard, 5_000],
   ] as const) {
     const time = (size: number): { ms: number; sheets: number } => {
