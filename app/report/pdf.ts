@@ -68,6 +68,31 @@ function paint(doc: PDFKit.PDFDocument, pen: Pen, stroke: Stroke | undefined, fi
   else if (stroke !== undefined) doc.stroke();
 }
 
+/** Most texts a printout writes recur (heads, keys, title blocks, the same figures): an
+ *  embedded font's encoding of a text (glyph ids, positions) is remembered, up to this many texts
+ *  a font, so it is shaped once. Its glyphs are in the subset from the first time. */
+const ENCODINGS_KEPT = 50_000;
+const remembering = new WeakSet<object>();
+
+type Encoder = { encode(text: string, features?: unknown): [string[], unknown[]] };
+
+function rememberEncodings(doc: PDFKit.PDFDocument): void {
+  const font = (doc as unknown as { _font?: Encoder })._font;
+  if (font === undefined || typeof font.encode !== 'function' || remembering.has(font)) return;
+  remembering.add(font);
+  const encode = font.encode.bind(font);
+  const kept = new Map<string, [string[], unknown[]]>();
+  font.encode = (text, features) => {
+    if (features !== undefined) return encode(text, features);
+    const known = kept.get(text);
+    if (known !== undefined) return known;
+    const made = encode(text);
+    if (kept.size >= ENCODINGS_KEPT) kept.clear();
+    kept.set(text, made);
+    return made;
+  };
+}
+
 function drawItem(doc: PDFKit.PDFDocument, pen: Pen, item: Item): void {
   switch (item.kind) {
     case 'line':
@@ -95,13 +120,55 @@ function drawItem(doc: PDFKit.PDFDocument, pen: Pen, item: Item): void {
       const shown = plainText(item.text); // no control characters in the PDF (sanitise.ts)
       if (shown === '') return;
       doc.font(item.font === 'bold' ? 'LW-Bold' : 'LW-Regular').fontSize(item.size);
+      rememberEncodings(doc);
       setFill(doc, pen, item.color ?? '#000000');
       const width = item.anchor === 'start' ? 0 : doc.widthOfString(shown);
       const x = item.anchor === 'start' ? item.x : item.anchor === 'middle' ? item.x - width / 2 : item.x - width;
-      doc.text(shown, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
+      // One line placed at a point: pdfkit's own one-line writer, given the width measured above,
+      // writes exactly what text() writes without shaping the text twice more (text() measures
+      // it again to wrap and to advance its cursor). text() where that writer is not there.
+      const fragment = (doc as unknown as { _fragment?: (text: string, x: number, y: number, options: object) => void })._fragment;
+      if (typeof fragment === 'function') fragment.call(doc, shown, x, item.y, { baseline: 'alphabetic', textWidth: width, wordCount: 1 });
+      else doc.text(shown, x, item.y, { lineBreak: false, baseline: 'alphabetic' });
       return;
     }
   }
+}
+
+/**
+ * pdfkit turns every operator it writes into a page (a line width, a move, a glyph run) into a
+ * buffer of its own; a printout of thousands of sheets writes millions. Here the operators are
+ * kept as text and handed over a page at a time, joined by the same line ends, so the content
+ * and the file are byte for byte what they were. Anything that is not text, a new page and the
+ * end of the document hand over what is kept first.
+ */
+function batchContent(doc: PDFKit.PDFDocument): void {
+  const write = doc.addContent.bind(doc);
+  const addPage = doc.addPage.bind(doc);
+  const end = doc.end.bind(doc);
+  let kept: string[] = [];
+  const flush = (): void => {
+    if (kept.length === 0) return;
+    const text = kept.join('\n');
+    kept = [];
+    write(text);
+  };
+  doc.addContent = (data: unknown) => {
+    if (typeof data === 'string') kept.push(data);
+    else {
+      flush();
+      write(data as string);
+    }
+    return doc;
+  };
+  doc.addPage = (options?: PDFKit.PDFDocumentOptions) => {
+    flush();
+    return addPage(options);
+  };
+  doc.end = () => {
+    flush();
+    end();
+  };
 }
 
 /** Render ready-made sheets to PDF bytes. */
@@ -121,6 +188,7 @@ export function sheetsToPdf(sheets: Sheet[], meta: { title: string; subject: str
       ModDate: meta.date,
     },
   });
+  batchContent(doc);
   doc.registerFont('LW-Regular', Buffer.from(fonts.regular));
   doc.registerFont('LW-Bold', Buffer.from(fonts.bold));
   const chunks: Buffer[] = [];
