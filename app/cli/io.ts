@@ -10,7 +10,7 @@
 
 import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
 import { formatProblem, LIMITS, parseJob, terminalText, type LoadResult, type Problem } from '../../engine/index.js';
-import { writeFileSafely } from '../main/safe-files.js';
+import { writeFileSafely, writeFilesSafely } from '../main/safe-files.js';
 
 export type ReadOutcome = { ok: true; text: string } | { ok: false; message: string };
 
@@ -106,4 +106,9 @@ function forTerminal(p: Problem): Problem {
 /** Write an output file (never a job file) with the care of writeFileSafely; throws a plain error. */
 export async function writeOutputFile(path: string, data: string | Uint8Array): Promise<void> {
   await writeFileSafely(path, data);
+}
+
+/** Several outputs with the same care, each folder flushed once (writeFilesSafely). */
+export async function writeOutputFiles(files: Iterable<{ path: string; data: string | Uint8Array }>): Promise<void> {
+  await writeFilesSafely(files);
 }

@@ -1,7 +1,8 @@
 // Reading and writing files so that no work is lost: Node's fs only (no Electron), shared by the
 // desktop app's saves and PDF export (app/main) and the command line's printout (app/cli/io.ts).
 //
-// writeFileSafely(file, data):
+// writeFileSafely(file, data), and writeFilesSafely(files) for a set (one flush and one look for
+// leftovers a folder):
 //   1. A read-only file is refused (it is the user's way of saying "do not change this").
 //   2. A symbolic link is followed: its target is written, and the link stays a link.
 //   3. The data goes to a temporary file beside the target (`.NAME.PID.RANDOM.tmp`), is flushed
@@ -55,8 +56,20 @@ function isCode(error: unknown, code: string): boolean {
   return typeof error === 'object' && error !== null && 'code' in error && (error as { code: unknown }).code === code;
 }
 
-/** Temporary files for `base` in a folder: ours and those of earlier runs. */
-const tempPattern = (base: string) => new RegExp(`^\\.${base.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}\\.(\\d+)(?:\\.[0-9a-f]+)?(?:\\.bak)?\\.tmp$`);
+/** A temporary file of ours or of an earlier run, `.NAME.PID[.RANDOM][.bak].tmp`, for one of
+ *  `names`: the process that made it, else null. */
+function leftoverOf(entry: string, names: ReadonlySet<string>): number | null {
+  if (!entry.startsWith('.') || !entry.endsWith('.tmp')) return null;
+  const rest = entry.slice(1, -'.tmp'.length);
+  for (const body of rest.endsWith('.bak') ? [rest.slice(0, -'.bak'.length), rest] : [rest]) {
+    const seg = body.split('.');
+    const n = seg.length;
+    // NAME.PID.RANDOM, else NAME.PID (a name may itself hold dots and digits)
+    if (n >= 3 && /^\d+$/.test(seg[n - 2]!) && /^[0-9a-f]+$/.test(seg[n - 1]!) && names.has(seg.slice(0, -2).join('.'))) return Number(seg[n - 2]);
+    if (n >= 2 && /^\d+$/.test(seg[n - 1]!) && names.has(seg.slice(0, -1).join('.'))) return Number(seg[n - 1]);
+  }
+  return null;
+}
 
 function running(pid: number): boolean {
   if (pid === process.pid) return true;
@@ -70,18 +83,21 @@ function running(pid: number): boolean {
 
 /** Removes temporary files of `file` left by a process that no longer runs. Never throws. */
 export async function removeLeftovers(file: string): Promise<string[]> {
-  const dir = path.dirname(file);
-  const pattern = tempPattern(path.basename(file));
+  return removeLeftoversOf(path.dirname(file), new Set([path.basename(file)]));
+}
+
+/** Temporary files of any of `names` in `dir` left by processes that no longer run, removed. */
+async function removeLeftoversOf(dir: string, names: ReadonlySet<string>): Promise<string[]> {
   const removed: string[] = [];
-  let names: string[];
+  let entries: string[];
   try {
-    names = await fs.readdir(dir);
+    entries = await fs.readdir(dir);
   } catch {
     return removed;
   }
-  for (const name of names) {
-    const m = pattern.exec(name);
-    if (m === null || running(Number(m[1]))) continue;
+  for (const name of entries) {
+    const pid = leftoverOf(name, names);
+    if (pid === null || running(pid)) continue;
     try {
       await fs.rm(path.join(dir, name), { force: true });
       removed.push(name);
@@ -147,6 +163,38 @@ async function keepBackup(target: string, dir: string): Promise<void> {
  *  on the disk (see the head of this file). Throws a FileRefusal or the fs error; `file` is
  *  then as it was. */
 export async function writeFileSafely(file: string, data: string | Uint8Array, options: WriteOptions = {}): Promise<void> {
+  const target = await replaceSafely(file, data, options);
+  await syncFolder(path.dirname(target));
+  await removeLeftovers(target);
+}
+
+/**
+ * Writes several files (made one at a time as they are asked for), each with the care of
+ * writeFileSafely, flushing each folder once and
+ * looking for leftovers once a folder at the end (a folder of thousands of sheets is not listed
+ * once per sheet). Stops at the first failure, which is thrown; the files written before it stay
+ * written, whole, and the one that failed is as it was.
+ */
+export async function writeFilesSafely(files: Iterable<{ path: string; data: string | Uint8Array }>, options: WriteOptions = {}): Promise<void> {
+  const written = new Map<string, Set<string>>();
+  try {
+    for (const f of files) {
+      const target = await replaceSafely(f.path, f.data, options);
+      const dir = path.dirname(target);
+      const names = written.get(dir) ?? new Set<string>();
+      names.add(path.basename(target));
+      written.set(dir, names);
+    }
+  } finally {
+    for (const [dir, names] of written) {
+      await syncFolder(dir);
+      await removeLeftoversOf(dir, names);
+    }
+  }
+}
+
+/** Steps 1 to 5 for one file, without flushing its folder: the file actually written. */
+async function replaceSafely(file: string, data: string | Uint8Array, options: WriteOptions): Promise<string> {
   const target = await writeTarget(file);
   const mode = await refuseReadOnly(target, file);
   const dir = path.dirname(target);
@@ -166,8 +214,7 @@ export async function writeFileSafely(file: string, data: string | Uint8Array, o
     await fs.rm(temp, { force: true }).catch(() => undefined);
     throw error;
   }
-  await syncFolder(dir);
-  await removeLeftovers(target);
+  return target;
 }
 
 export type BoundedRead = { ok: true; bytes: Uint8Array } | { ok: false; tooBig: true; limit: number };

@@ -102,10 +102,10 @@ const PAD = 0.8;
 const STATUS_SYMBOL_W = 3;
 
 /** Column widths fitting `width`: natural widths, then flexible columns give way. */
-function widths(cols: Column[], rows: string[][], width: number, size: number): number[] {
+function widths(cols: Column[], contentWidth: (col: Column, bold: boolean) => number, width: number, size: number): number[] {
   const natural = cols.map((col, i) => {
     const headWord = Math.max(...col.head.split(' ').map((w) => textWidth(w, 'bold', size)));
-    const content = Math.max(0, ...rows.map((r) => textWidth(r[i] ?? '', col.status !== undefined || i === 0 ? 'bold' : 'regular', size)));
+    const content = contentWidth(col, col.status !== undefined || i === 0);
     const extra = col.status !== undefined ? STATUS_SYMBOL_W : 0;
     // + 0.1 mm: a head word exactly as wide as its column must not wrap on rounding.
     return Math.max(headWord, col.flexible === true ? Math.min(content, 45) : content) + 2 * PAD + extra + 0.1;
@@ -142,8 +142,34 @@ export function schedulePages(job: Job, results: Results, box: Box): Item[][] {
   const secs = sections(results);
   const links = new Map(job.links.map((l) => [l.id, l]));
   const ordered = verdictOrder(results.circuits);
-  const cellsOf = (cols: Column[]): string[][] => ordered.map((c) => cols.map((col) => col.value(c, links.get(c.link))));
-  const fits = (cols: Column[]): boolean => widths(cols, cellsOf(cols), box.w, size).reduce((a, w) => a + w, 0) <= box.w + 0.01;
+  // Each column's cells and widest cell worked out once, however many ways the columns are tried.
+  const cellCache = new Map<Column, string[]>();
+  const columnCells = (col: Column): string[] => {
+    let cells = cellCache.get(col);
+    if (cells === undefined) {
+      cells = ordered.map((c) => col.value(c, links.get(c.link)));
+      cellCache.set(col, cells);
+    }
+    return cells;
+  };
+  const widest = new Map<Column, [number | undefined, number | undefined]>();
+  const contentWidth = (col: Column, bold: boolean): number => {
+    const known = widest.get(col) ?? [undefined, undefined];
+    const at = bold ? 1 : 0;
+    let w = known[at];
+    if (w === undefined) {
+      w = 0;
+      for (const cell of columnCells(col)) w = Math.max(w, textWidth(cell, bold ? 'bold' : 'regular', size));
+      known[at] = w;
+      widest.set(col, known);
+    }
+    return w;
+  };
+  const cellsOf = (cols: Column[]): string[][] => {
+    const byColumn = cols.map(columnCells);
+    return ordered.map((_, r) => byColumn.map((cells) => cells[r] ?? ''));
+  };
+  const fits = (cols: Column[]): boolean => widths(cols, contentWidth, box.w, size).reduce((a, w) => a + w, 0) <= box.w + 0.01;
   // Greedy: each table takes the next sections while they still fit.
   const groups: number[][] = [];
   for (let k = 0; k < secs.length; k++) {
@@ -155,7 +181,7 @@ export function schedulePages(job: Job, results: Results, box: Box): Item[][] {
     const cols = [LINK, ...g.flatMap((i) => secs[i] ?? [])];
     const cells = cellsOf(cols);
     const part = groups.length === 1 ? '' : `, ${g.map((i) => PART_NAME[i] ?? '').join(', ')}`;
-    return table(results, ordered, cols, cells, widths(cols, cells, box.w, size), box, size, part);
+    return table(results, ordered, cols, cells, widths(cols, contentWidth, box.w, size), box, size, part);
   });
 }
 

@@ -8,7 +8,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { readJobFile, RefusedFiles, saveJobText, writeFileAtomic } from '../../app/main/job-files.js';
-import { readBounded, removeLeftovers, writeFileSafely } from '../../app/main/safe-files.js';
+import { readBounded, removeLeftovers, writeFileSafely, writeFilesSafely } from '../../app/main/safe-files.js';
 
 const SAFE_FILES = fileURLToPath(new URL('../../app/main/safe-files.ts', import.meta.url));
 const DEMO = path.resolve('assets/demo.lwj');
@@ -150,6 +150,28 @@ describe('a save cut short', () => {
     expect((await readJobFile(file, new RefusedFiles())).ok).toBe(true);
     expect(await listing()).toEqual([running, other, 'job.lwj'].sort());
     expect(await removeLeftovers(path.join(dir, 'other.lwj'))).toEqual([other]);
+  });
+
+  it('a set of files (the printout\'s sheets) is written whole, leftovers of the set removed once, others kept', async () => {
+    const dead = deadPid();
+    // Names holding dots and digits, as the sheets' do: the leftover is told by its whole name.
+    const stale = [`.sheet-2.svg.${dead}.0123456789ab.tmp`, `.sheet-2.svg.${dead}.0123456789ab.bak.tmp`, `.sheet-10.svg.${dead}.tmp`];
+    const kept = [`.sheet-3.svg.${dead}.0123456789ab.tmp`, `.sheet-2.svg.${process.ppid}.0123456789ab.tmp`, '.sheet-2.svg.tmp', 'notes.txt'];
+    for (const name of [...stale, ...kept]) await fs.writeFile(path.join(dir, name), 'partial');
+    const files = [1, 2, 10].map((n) => ({ path: path.join(dir, `sheet-${n}.svg`), data: `<svg>${n}</svg>` }));
+    await writeFilesSafely(files);
+    for (const f of files) expect(await fs.readFile(f.path, 'utf8')).toBe(f.data);
+    expect(await listing()).toEqual([...kept, 'sheet-1.svg', 'sheet-10.svg', 'sheet-2.svg'].sort());
+  });
+
+  it('a set stops at a read-only file: those before it written, it and those after it as they were', async () => {
+    const names = ['a.svg', 'b.svg', 'c.svg'].map((n) => path.join(dir, n));
+    await fs.writeFile(names[1]!, 'old b');
+    await fs.chmod(names[1]!, 0o444);
+    await expect(writeFilesSafely(names.map((p) => ({ path: p, data: 'new' })))).rejects.toThrow(/read-only/);
+    expect(await fs.readFile(names[0]!, 'utf8')).toBe('new');
+    expect(await fs.readFile(names[1]!, 'utf8')).toBe('old b');
+    expect(await listing()).toEqual(['a.svg', 'b.svg']);
   });
 
   it('a write that fails part-way leaves the target whole and no temporary file', async () => {

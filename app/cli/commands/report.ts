@@ -8,7 +8,7 @@ import { analyse, formatProblem } from '../../../engine/index.js';
 import { layoutReport, sheetToSvg, type ReportOptions } from '../../../engine/report/index.js';
 import type { OptionSpec } from '../args.js';
 import { EXIT, type Command } from '../command.js';
-import { loadJobFile, writeOutputFile } from '../io.js';
+import { loadJobFile, writeOutputFile, writeOutputFiles } from '../io.js';
 import { exitFor } from './check.js';
 import { summaryLine } from '../format.js';
 import { runPrefix } from '../help.js';
@@ -125,7 +125,10 @@ export const report: Command = {
     if (svgDir !== null) {
       try {
         mkdirSync(svgDir, { recursive: true });
-        for (const [i, sheet] of sheets.entries()) await writeAtomically(join(svgDir, `sheet-${i + 1}.svg`), sheetToSvg(sheet));
+        // Each drawn as it is written, the folder flushed once at the end.
+        await writeOutputFiles((function* () {
+          for (const [i, sheet] of sheets.entries()) yield { path: join(svgDir, `sheet-${i + 1}.svg`), data: sheetToSvg(sheet) };
+        })());
         wrote.push(`${sheets.length} SVG file${sheets.length === 1 ? '' : 's'} in ${svgDir}`);
       } catch (error) {
         err(`report: could not write the SVG sheets into ${svgDir}: ${why(error)}\n`);
