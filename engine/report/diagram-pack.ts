@@ -1,8 +1,9 @@
 // Packing the diagram's sections (diagram-sections.ts) onto sheets, in reading order from the
 // supply down, shelf by shelf; a section too long for the room left continues on the next sheet
 // at a row boundary, its board repeated at the head. The full legend takes the foot of one
-// diagram sheet (the first that can hold it without costing a sheet or a split section); the
-// others carry a one-line key. Then the sheets are balanced: the same number of sheets and no
+// diagram sheet (the first that can hold it without costing a sheet or a split section: on the
+// first four sheets the sections may move on to make room, past those only a sheet that already
+// has the room takes it); the others carry a one-line key. Then the sheets are balanced: the same number of sheets and no
 // more split sections, but the smallest height every sheet must hold, so the last sheet is not
 // left with one board while the first is crammed.
 
