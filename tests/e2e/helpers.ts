@@ -11,10 +11,23 @@ export async function centreOf(page: Page, selector: string): Promise<{ x: numbe
   return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
 }
 
+/** The centre of `selector` once it has stopped moving (a connect may rearrange the sheet and
+ *  move the view, taking a few frames, later on a loaded machine). */
+async function settledCentreOf(page: Page, selector: string): Promise<{ x: number; y: number }> {
+  let last = await centreOf(page, selector);
+  for (let tries = 0; tries < 40; tries++) {
+    await page.waitForTimeout(100);
+    const now = await centreOf(page, selector);
+    if (Math.abs(now.x - last.x) < 0.5 && Math.abs(now.y - last.y) < 0.5) return now;
+    last = now;
+  }
+  return last;
+}
+
 /** Drags from one node's outgoing handle to another node's incoming handle with the mouse. */
 export async function connect(page: Page, from: string, to: string): Promise<void> {
-  const a = await centreOf(page, `.react-flow__handle.source[data-nodeid="${from}"]`);
-  const b = await centreOf(page, `.react-flow__handle.target[data-nodeid="${to}"]`);
+  const a = await settledCentreOf(page, `.react-flow__handle.source[data-nodeid="${from}"]`);
+  const b = await settledCentreOf(page, `.react-flow__handle.target[data-nodeid="${to}"]`);
   await page.mouse.move(a.x, a.y);
   await page.mouse.down();
   await page.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2, { steps: 8 });
