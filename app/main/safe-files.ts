@@ -170,10 +170,9 @@ export async function writeFileSafely(file: string, data: string | Uint8Array, o
 
 /**
  * Writes several files (made one at a time as they are asked for), each with the care of
- * writeFileSafely, flushing each folder once and
- * looking for leftovers once a folder at the end (a folder of thousands of sheets is not listed
- * once per sheet). Stops at the first failure, which is thrown; the files written before it stay
- * written, whole, and the one that failed is as it was.
+ * writeFileSafely, but flushes each folder and looks in it for leftovers once, at the end (a
+ * folder of thousands of sheets is not listed once per sheet). Stops at the first failure, which
+ * is thrown; the files written before it stay written, whole, and the one that failed is as it was.
  */
 export async function writeFilesSafely(files: Iterable<{ path: string; data: string | Uint8Array }>, options: WriteOptions = {}): Promise<void> {
   const written = new Map<string, Set<string>>();
