@@ -3,9 +3,9 @@
 // at a row boundary, its board repeated at the head. The full legend takes the foot of one
 // diagram sheet (the first that can hold it without costing a sheet or a split section: on the
 // first four sheets the sections may move on to make room, past those only a sheet that already
-// has the room takes it); the others carry a one-line key. Then the sheets are balanced: the same number of sheets and no
-// more split sections, but the smallest height every sheet must hold, so the last sheet is not
-// left with one board while the first is crammed.
+// has the room takes it); the others carry a one-line key. Then the sheets are balanced: the
+// same number of sheets and no more split sections, but the smallest height every sheet must
+// hold, so the last sheet is not left with one board while the first is crammed.
 
 import type { Job } from '../model/types.js';
 import { buildSections, headHeight, type Piece, type Section, type SectionPlan } from './diagram-sections.js';
@@ -128,16 +128,15 @@ export function planSections(job: Job, area: Box, legendExtra: number): SectionP
     const base = pack(sections, area.w, () => area.h);
     if (base === null) continue;
     const count = base.length;
-    // The legend on the earliest sheet that can take it at no cost, else after the diagram.
-    // The first few sheets are tried by packing again (the legend may push a section on and
-    // still keep the count); past those only a sheet whose content already leaves the room,
-    // which packs exactly as before, so a job of thousands of sheets is not packed thousands of
-    // times.
+    // The legend on the earliest sheet that can take it at no cost, else after the diagram. A
+    // sheet whose content already leaves the room packs exactly as before; the first few are
+    // also tried by packing again (the legend may push a section on and keep the count), so a
+    // job of thousands of sheets is not packed thousands of times.
     let legendSheet: number | null = null;
     let best = base;
     const baseSplits = splits(base);
+    const short = area.h - legendExtra;
     for (let k = 0; k < count; k++) {
-      const short = area.h - legendExtra;
       if (used(base[k] ?? []) <= short + FIT_SLACK) {
         legendSheet = k;
         break;

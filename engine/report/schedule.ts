@@ -152,16 +152,14 @@ export function schedulePages(job: Job, results: Results, box: Box): Item[][] {
     }
     return cells;
   };
-  const widest = new Map<Column, [number | undefined, number | undefined]>();
+  const widest = { regular: new Map<Column, number>(), bold: new Map<Column, number>() };
   const contentWidth = (col: Column, bold: boolean): number => {
-    const known = widest.get(col) ?? [undefined, undefined];
-    const at = bold ? 1 : 0;
-    let w = known[at];
+    const weight = bold ? 'bold' : 'regular';
+    let w = widest[weight].get(col);
     if (w === undefined) {
       w = 0;
-      for (const cell of columnCells(col)) w = Math.max(w, textWidth(cell, bold ? 'bold' : 'regular', size));
-      known[at] = w;
-      widest.set(col, known);
+      for (const cell of columnCells(col)) w = Math.max(w, textWidth(cell, weight, size));
+      widest[weight].set(col, w);
     }
     return w;
   };
