@@ -140,11 +140,13 @@ describe('fixes in the schedule', () => {
     // A passing row has no menu.
     expect(container.querySelector('[data-fix-menu="C1"]')).toBeNull();
     act(() => fireEvent.click(row().querySelector('[data-fix-menu="C2"]')!));
-    const menu = container.querySelector('[data-fix-menu-list="C2"]')!;
+    // The menu is on the page's body, outside the contained schedule body (which would clip it).
+    const menu = document.querySelector('[data-fix-menu-list="C2"]')!;
+    expect(container.contains(menu)).toBe(false);
     expect([...menu.querySelectorAll('[data-fix]')].map((b) => b.getAttribute('data-fix'))).toEqual(['length', 'size', 'device', 'rcd']);
     clickFix(menu, 'device', 'C2');
     expect(status()).toBe('pass');
-    expect(container.querySelector('[data-fix-menu-list]')).toBeNull(); // the menu closes
+    expect(document.querySelector('[data-fix-menu-list]')).toBeNull(); // the menu closes
     expect(useEditor.getState().undoLabel).toMatch(/^fix C2: device/);
   });
 });
@@ -158,12 +160,24 @@ describe('the Fix menu by keyboard', () => {
     expect(button.getAttribute('aria-expanded')).toBe('false');
     act(() => fireEvent.click(button));
     expect(button.getAttribute('aria-expanded')).toBe('true');
-    const first = container.querySelector('[data-fix-menu-list="C2"] [data-fix]');
+    const first = document.querySelector('[data-fix-menu-list="C2"] [data-fix]');
     expect(document.activeElement).toBe(first);
     act(() => void fireEvent.keyDown(first!, { key: 'Escape' }));
-    expect(container.querySelector('[data-fix-menu-list]')).toBeNull();
+    expect(document.querySelector('[data-fix-menu-list]')).toBeNull();
     expect(document.activeElement).toBe(button);
     expect(linkOf('C2').cable.length).toBe(120); // nothing applied
+  });
+
+  it('closes when the focus tabs out of it', () => {
+    const { container } = render(<><SchedulePanel /><button type="button" data-elsewhere>elsewhere</button></>);
+    const button = container.querySelector<HTMLButtonElement>('[data-fix-menu="C2"]')!;
+    act(() => fireEvent.click(button));
+    const first = document.querySelector('[data-fix-menu-list="C2"] [data-fix]')!;
+    const next = document.querySelectorAll('[data-fix-menu-list="C2"] [data-fix]')[1]!;
+    act(() => void fireEvent.blur(first, { relatedTarget: next })); // within the menu: stays open
+    expect(document.querySelector('[data-fix-menu-list]')).not.toBeNull();
+    act(() => void fireEvent.blur(next, { relatedTarget: container.querySelector('[data-elsewhere]') }));
+    expect(document.querySelector('[data-fix-menu-list]')).toBeNull();
   });
 });
 

@@ -83,6 +83,16 @@ describe('one-click fixes', () => {
     const page = await app.newPage();
     const id = failing.link;
     await page.click(`[data-fix-menu="${id}"]`);
+    // The menu opens just below its button and on top of everything: what is at its first fix's
+    // centre is that fix (a layout container around the schedule once clipped and moved it).
+    const placed = await page.evaluate((link) => {
+      const button = document.querySelector(`[data-fix-menu="${link}"]`)!.getBoundingClientRect();
+      const fix = document.querySelector(`[data-fix-menu-list="${link}"] [data-fix]`)!;
+      const r = fix.getBoundingClientRect();
+      const hit = document.elementFromPoint(r.left + r.width / 2, r.top + r.height / 2);
+      return { onTop: !!hit && fix.contains(hit), below: r.top >= button.bottom && r.top - button.bottom < 40 };
+    }, id);
+    expect(placed).toEqual({ onTop: true, below: true });
     await page.click(`[data-fix-menu-list="${id}"] [data-fix="length"]`);
     await page.waitForFunction(
       (link) => document.querySelector(`[data-schedule-row="${link}"] .lwp-sticky-status [data-status-badge]`)?.getAttribute('data-status-badge') === 'pass',

@@ -2,6 +2,7 @@
 // compact menu of the same buttons in the schedule row (FixMenu). Each click is one undoable edit.
 
 import { useEffect, useId, useLayoutEffect, useRef, useState } from 'react';
+import { createPortal } from 'react-dom';
 import { CAUTION, type CircuitResult, type Fix } from '../../../../engine/index.js';
 import { selectResult, useEditor } from '../../store/index.js';
 import { STATUS_LOOK } from '../format.js';
@@ -173,7 +174,9 @@ export function FixMenu({ linkId }: { linkId: string }) {
       >
         Fix ({count}) <span aria-hidden="true">▾</span>
       </button>
-      {open ? (
+      {/* The menu goes to the page's body: the schedule and details bodies are layout containers
+          (CSS containment), which would place a fixed menu by their corner and clip it. */}
+      {open ? createPortal(
         <div
           ref={menu}
           id={menuId}
@@ -189,11 +192,17 @@ export function FixMenu({ linkId }: { linkId: string }) {
               finish();
             }
           }}
+          onBlur={(e) => {
+            // Tabbing out of the menu closes it (it sits at the end of the page, away from its row).
+            const to = e.relatedTarget as Node | null;
+            if (to && !menu.current?.contains(to) && !button.current?.contains(to)) setOpen(false);
+          }}
         >
           {r.fixes.map((fix, i) => (
             <FixButton key={`${fix.kind}-${i}`} result={r} fix={fix} onDone={finish} />
           ))}
-        </div>
+        </div>,
+        document.body,
       ) : null}
     </span>
   );
