@@ -21,7 +21,8 @@ import { Sums } from './sums.js';
 import { atMost, fixedOrRange } from './tolerance.js';
 import { dropTable, dropTableWithLink, voltageDropLimit, type DropTable } from './voltage-drop.js';
 import { checkWithstand } from './withstand.js';
-import { worstPath } from './worst-path.js';
+import { worstPathOf } from './worst-path.js';
+import { Version } from './versions.js';
 
 const kA = (a: number): string => `${(a / 1000).toFixed(2)} kA`;
 const orNull = (v: number): number | null => (Number.isNaN(v) ? null : v);
@@ -45,6 +46,10 @@ interface State {
   circuits: CircuitResult[];
   /** The largest source impedance each checked link tolerates (NaN when it does not count). */
   headroom: Float64Array;
+  /** Each link's ratio for the worst path (NaN when unchecked or without a ratio). */
+  ratios: Float64Array;
+  /** Which version of the shared tables this state reads (versions.ts). */
+  version: Version;
   /** Each supply's source phasor, by node index (filled as needed). */
   phasors: Array<Complex | undefined>;
 }
@@ -61,7 +66,16 @@ export function createAnalysis(job: Job): Analysis {
   const loads = loadTable(order, phases);
   const drops = dropTable(order, phases, loads, rules);
   const faults = faultTable(order, phases, rules);
-  const state: State = { rules, sums, phases, loads, drops, faults, facts: new LoopTable(job.links.length), circuits: new Array<CircuitResult>(job.links.length), headroom: new Float64Array(job.links.length).fill(NaN), phasors: [] };
+  const nl = job.links.length;
+  const facts = new LoopTable(nl);
+  const headroom = new Float64Array(nl).fill(NaN);
+  const ratios = new Float64Array(nl).fill(NaN);
+  // Every table a length change writes, shared by the analyses derived from this one.
+  const version = new Version({
+    link: [sums.linkRe, sums.linkIm, drops.own, headroom, ratios, facts.protecting, facts.budget, facts.beforeRe, facts.beforeIm, facts.perRe, facts.perIm, facts.zeRe, facts.zeIm, facts.zeroLoop],
+    node: [sums.nodeRe, sums.nodeIm, drops.atNode, faults.imax, faults.re, faults.im],
+  });
+  const state: State = { rules, sums, phases, loads, drops, faults, facts, circuits: new Array<CircuitResult>(nl), headroom, ratios, version, phasors: [] };
   for (let l = 0; l < job.links.length; l++) checkOne(state, l);
   // Fixes need the protecting link's design current, known only now.
   for (let l = 0; l < job.links.length; l++) finishOne(state, l);
@@ -78,6 +92,24 @@ export function reanalyse(previous: Analysis, job: Job): Analysis {
   const l = onlyLengthChanged(previous.job, job);
   if (l < 0) return createAnalysis(job);
   const prev = previous.state;
+  // The links redone (l and the feeders below it) and the nodes whose sums change (l's subtree).
+  const before = prev.sums.order;
+  const redo: number[] = [l];
+  const changed: number[] = [];
+  const to = before.linkTo[l]!;
+  if (to >= 0 && before.feederOf[to] === l) {
+    const { start, end } = before.subtree(to);
+    for (let k = start; k < end; k++) {
+      const n = before.pre[k]!;
+      changed.push(n);
+      const f = before.feederOf[n]!;
+      if (k > start && f >= 0) redo.push(f);
+    }
+  }
+  // The shared tables to the previous analysis's values, then a new version written in place
+  // at those entries only (the previous analysis keeps its values: versions.ts).
+  prev.version.reroot();
+  const version = prev.version.derive(Int32Array.from(redo), Int32Array.from(changed));
   const sums = prev.sums.withLinkChanged(job, l);
   const order = sums.order;
   const state: State = {
@@ -85,19 +117,9 @@ export function reanalyse(previous: Analysis, job: Job): Analysis {
     sums,
     drops: dropTableWithLink(prev.drops, order, prev.phases, prev.loads, prev.rules, l),
     faults: faultTableWithLink(prev.faults, order, prev.phases, prev.rules, l),
-    facts: prev.facts.copy(),
     circuits: prev.circuits.slice(),
-    headroom: prev.headroom.slice(),
+    version,
   };
-  const redo: number[] = [l];
-  const to = order.linkTo[l]!;
-  if (to >= 0 && order.feederOf[to] === l) {
-    const { start, end } = order.subtree(to);
-    for (let k = start + 1; k < end; k++) {
-      const f = order.feederOf[order.pre[k]!]!;
-      if (f >= 0) redo.push(f);
-    }
-  }
   const summary = cloneSummary(previous.results.summary);
   for (const k of redo) count(summary, prev.circuits[k]!, -1);
   for (const k of redo) checkOne(state, k);
@@ -222,6 +244,7 @@ function finishOne(state: State, l: number): void {
   if (!needsFixes) {
     result.verdict = verdictOf(result);
     keepFinite(result);
+    state.ratios[l] = result.status === 'unchecked' || result.ratio === null ? NaN : result.ratio;
     return;
   }
   const p = facts.protecting[l]!;
@@ -237,6 +260,7 @@ function finishOne(state: State, l: number): void {
   });
   result.verdict = verdictOf(result);
   keepFinite(result);
+  state.ratios[l] = result.status === 'unchecked' || result.ratio === null ? NaN : result.ratio;
 }
 
 /** What each number of a circuit is, for the note when it leaves the range of numbers. */
@@ -328,7 +352,7 @@ function resultsOf(state: State, summary: Summary = summarise(state.circuits)): 
     version: 2,
     basis: rules.basis,
     circuits,
-    worst: worstPath(order, circuits),
+    worst: worstPathOf(order, state.ratios),
     supplies,
     summary,
   };

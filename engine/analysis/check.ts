@@ -54,20 +54,16 @@ export class LoopTable {
   readonly zeIm: Float64Array;
   readonly zeroLoop: Uint8Array;
 
-  constructor(links: number, from?: LoopTable) {
-    this.protecting = from ? from.protecting.slice() : new Int32Array(links).fill(-1);
-    this.budget = from ? from.budget.slice() : new Float64Array(links).fill(NaN);
-    this.beforeRe = from ? from.beforeRe.slice() : new Float64Array(links).fill(NaN);
-    this.beforeIm = from ? from.beforeIm.slice() : new Float64Array(links).fill(NaN);
-    this.perRe = from ? from.perRe.slice() : new Float64Array(links);
-    this.perIm = from ? from.perIm.slice() : new Float64Array(links);
-    this.zeRe = from ? from.zeRe.slice() : new Float64Array(links).fill(NaN);
-    this.zeIm = from ? from.zeIm.slice() : new Float64Array(links).fill(NaN);
-    this.zeroLoop = from ? from.zeroLoop.slice() : new Uint8Array(links);
-  }
-
-  copy(): LoopTable {
-    return new LoopTable(this.protecting.length, this);
+  constructor(links: number) {
+    this.protecting = new Int32Array(links).fill(-1);
+    this.budget = new Float64Array(links).fill(NaN);
+    this.beforeRe = new Float64Array(links).fill(NaN);
+    this.beforeIm = new Float64Array(links).fill(NaN);
+    this.perRe = new Float64Array(links);
+    this.perIm = new Float64Array(links);
+    this.zeRe = new Float64Array(links).fill(NaN);
+    this.zeIm = new Float64Array(links).fill(NaN);
+    this.zeroLoop = new Uint8Array(links);
   }
 
   /** Forget what an earlier check of link l left. */

@@ -62,9 +62,12 @@ export function faultTable(order: TreeOrder, phases: PhaseTable, rules: Resolved
   return table;
 }
 
-/** The fault levels over a job in which only link l's cable changed: its subtree is redone. */
+/**
+ * The fault levels over a job in which only link l's cable changed: its subtree is redone, in
+ * place (the tables are shared between versions, versions.ts; the caller saved those entries).
+ */
 export function faultTableWithLink(prev: FaultTable, order: TreeOrder, phases: PhaseTable, rules: ResolvedRules, l: number): FaultTable {
-  const table = { imax: prev.imax.slice(), re: prev.re.slice(), im: prev.im.slice() };
+  const table = prev;
   const to = order.linkTo[l]!;
   if (to >= 0 && order.feederOf[to] === l) {
     const { start, end } = order.subtree(to);

@@ -65,16 +65,15 @@ export class Sums {
   }
 
   /**
-   * These sums over `job`, a job of the same shape in which only link l's cable changed:
-   * its impedance and the sums of its subtree are redone, everything else is shared or copied.
+   * These sums over `job`, a job of the same shape in which only link l's cable changed: its
+   * impedance and the sums of its subtree are redone in place. The tables are shared with this
+   * Sums (versions.ts: the caller has saved the entries written here, link l and the nodes of its
+   * subtree, and owns the tables from now on).
    */
   withLinkChanged(job: Job, l: number): Sums {
     const copy = Object.create(Sums.prototype) as Sums;
     const order = this.order.withJob(job);
-    const linkRe = this.linkRe.slice();
-    const linkIm = this.linkIm.slice();
-    const nodeRe = this.nodeRe.slice();
-    const nodeIm = this.nodeIm.slice();
+    const { linkRe, linkIm, nodeRe, nodeIm } = this;
     const z = linkImpedance(job.links[l]!.cable, this.rules);
     linkRe[l] = z.re;
     linkIm[l] = z.im;
@@ -91,7 +90,7 @@ export class Sums {
         nodeIm[n] = nodeIm[p]! + linkIm[f]!;
       }
     }
-    Object.assign(copy, this, { order, linkRe, linkIm, nodeRe, nodeIm });
+    Object.assign(copy, this, { order });
     return copy;
   }
 

@@ -50,10 +50,13 @@ export function dropTable(order: TreeOrder, phases: PhaseTable, loads: LoadTable
   return { own, atNode };
 }
 
-/** The drops over a job in which only link l's cable changed: its own drop and its subtree's totals. */
+/**
+ * The drops over a job in which only link l's cable changed: its own drop and its subtree's
+ * totals, in place (the tables are shared between versions, versions.ts; the caller saved those
+ * entries).
+ */
 export function dropTableWithLink(prev: DropTable, order: TreeOrder, phases: PhaseTable, loads: LoadTable, rules: ResolvedRules, l: number): DropTable {
-  const own = prev.own.slice();
-  const atNode = prev.atNode.slice();
+  const { own, atNode } = prev;
   const ib = loads.ib[l]!;
   own[l] = Number.isNaN(ib) ? NaN : linkVoltageDrop(order.links[l]!, order.links[l]!.cable.active, phases.link[l]!, ib, loads.pf[l]!, rules);
   const to = order.linkTo[l]!;

@@ -2,17 +2,17 @@
 // file order on a tie) ends it; the path runs from its supply to its far end.
 
 import type { TreeOrder } from './order.js';
-import type { CircuitResult, WorstPath } from './results.js';
+import type { WorstPath } from './results.js';
 
-export function worstPath(order: TreeOrder, circuits: readonly CircuitResult[]): WorstPath | null {
+/** From each link's ratio in a table (NaN where the link is unchecked or has no ratio). */
+export function worstPathOf(order: TreeOrder, ratios: Float64Array): WorstPath | null {
   let index = -1;
   let ratio = -Infinity;
-  for (let i = 0; i < circuits.length; i++) {
-    const c = circuits[i]!;
-    if (c.status === 'unchecked' || c.ratio === null) continue;
-    if (index < 0 || c.ratio > ratio) {
+  for (let i = 0; i < ratios.length; i++) {
+    const r = ratios[i]!;
+    if (r > ratio || (index < 0 && r === r)) {
       index = i;
-      ratio = c.ratio;
+      ratio = r;
     }
   }
   if (index < 0) return null;

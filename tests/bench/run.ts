@@ -6,6 +6,9 @@
 //   npm run bench -- --json     only one JSON object per size, one per line, on stdout
 //   npm run bench -- --json --records   the same, then one object per record
 //   npm run bench -- --no-ui    the table without the browser benchmark
+//   npm run bench -- --sizes 10000      only the sizes listed (comma-separated circuit counts)
+//   npm run bench -- --job site.lwj     one more line (or JSON object) for a job file of your own,
+//                               measured the same way (its "circuits": links ending at a point)
 //
 // Per size: jsonParseMs (JSON.parse of the file's text), loadMs (parseJob: the limits, parse,
 // validation), analyseMs (analyse of the loaded job), reanalyseMs (the engine's reanalyse after
@@ -22,6 +25,7 @@
 // the growth: the time at 4n over 4 times the time at n (about 1 when the layout is linear). Then the command's start-up
 // (`node bin/loopwright.mjs --help`, median of 7; target well under half a second).
 
+import { readFileSync } from 'node:fs';
 import * as engine from '../../engine/index.js';
 import type { Job, Results } from '../../engine/index.js';
 import { analyse, parseJob, serialiseJob } from '../../engine/index.js';
@@ -33,8 +37,45 @@ const TARGETS = { load: 1.5, analyse: 1, reanalyse: 1 / 20 };
 const ROUNDS = 21;
 const ROUND_MS = 20;
 
-const argv = new Set(process.argv.slice(2));
+const args = process.argv.slice(2);
+const argv = new Set(args);
 const json = argv.has('--json');
+
+/** The value after `--name` (or in `--name=value`), or null when the option is not given. */
+function option(name: string): string | null {
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i]!;
+    if (a === name) {
+      const v = args[i + 1];
+      if (v === undefined || v.startsWith('--')) usage(`${name} needs a value`);
+      return v;
+    }
+    if (a.startsWith(`${name}=`)) return a.slice(name.length + 1);
+  }
+  return null;
+}
+
+function usage(problem: string): never {
+  console.error(`bench: ${problem}. Usage: npm run bench -- [--json] [--records] [--no-ui] [--sizes 100,1000,10000] [--job FILE]`);
+  process.exit(2);
+}
+
+const KNOWN_OPTIONS = new Set(['--json', '--records', '--no-ui', '--sizes', '--job']);
+for (let i = 0; i < args.length; i++) {
+  const a = args[i]!;
+  const name = a.includes('=') ? a.slice(0, a.indexOf('=')) : a;
+  if (!KNOWN_OPTIONS.has(name)) usage(`unknown option ${JSON.stringify(a)}`);
+  if ((a === '--sizes' || a === '--job') && i + 1 < args.length) i++;
+}
+const sizesOption = option('--sizes');
+const SIZES_RUN: number[] = sizesOption === null
+  ? SIZES
+  : sizesOption.split(',').map((v) => {
+      const n = Number(v.trim());
+      if (!Number.isInteger(n) || n < 1 || n > 90_000) usage(`--sizes takes circuit counts from 1 to 90,000, got ${JSON.stringify(v)}`);
+      return n;
+    });
+const jobFile = option('--job');
 const records = !json || argv.has('--records');
 const ui = !json && !argv.has('--no-ui');
 
@@ -81,7 +122,8 @@ function sideBySide(fns: Record<string, () => unknown>): Record<string, number> 
 
 /** The job with one final circuit's cable length changed (the middle one), as an edit would. */
 function withLengthChanged(job: Job): Job {
-  const i = job.links.findIndex((l, k) => k >= job.links.length / 2 && l.from !== 'S1' && !l.id.startsWith('SM') && l.id !== 'M1');
+  const points = new Set(job.nodes.filter((n) => n.kind === 'point').map((n) => n.id));
+  const i = job.links.findIndex((l, k) => k >= job.links.length / 2 && points.has(l.to));
   const at = i < 0 ? job.links.length - 1 : i;
   const links = job.links.slice();
   const link = links[at]!;
@@ -102,13 +144,19 @@ interface SizeResult {
   loadRatio: number;
   analyseRatio: number;
   reanalyseRatio: number;
+  /** The job file measured (--job), absent for a generated job. */
+  file?: string;
 }
 
 function measureSize(circuits: number): SizeResult {
   const job = generateJob(circuits);
-  const text = serialiseJob(job);
+  return measureText(circuits, serialiseJob(job), `the generated ${circuits}-circuit job`);
+}
+
+function measureText(circuits: number, text: string, what: string): SizeResult {
   const loaded = parseJob(text);
-  if (!loaded.ok) throw new Error(`the generated ${circuits}-circuit job does not load: ${loaded.problems[0]?.message}`);
+  if (!loaded.ok) throw new Error(`${what} does not load: ${loaded.problems[0]?.where} ${loaded.problems[0]?.field}: ${loaded.problems[0]?.message}`);
+  const job = loaded.job;
   const edited = withLengthChanged(loaded.job);
   const previous = incremental?.createAnalysis(loaded.job);
   const again = incremental !== null ? () => incremental.reanalyse(previous, edited) : () => analyse(edited);
@@ -183,11 +231,27 @@ if (!json) {
   );
   console.log(`${''.padStart(8)} ${''.padStart(9)} ${'ms'.padStart(11)} ${'ms'.padStart(9)} ${'ms'.padStart(9)} ${'ms'.padStart(10)}   ${'target ≤ 1.5'.padEnd(20)} ${'target ≤ 1'.padEnd(20)} target ≤ 0.05`);
 }
-for (const circuits of SIZES) {
-  const r = measureSize(circuits);
+const runs: { circuits: number; file: string | null }[] = SIZES_RUN.map((circuits) => ({ circuits, file: null }));
+if (jobFile !== null) runs.push({ circuits: 0, file: jobFile });
+for (const run of runs) {
+  let r: SizeResult;
+  if (run.file === null) r = measureSize(run.circuits);
+  else {
+    let text: string;
+    try {
+      text = readFileSync(run.file, 'utf8');
+    } catch (e) {
+      usage(`cannot read the job file ${run.file} (${e instanceof Error ? e.message : String(e)})`);
+    }
+    const loaded = parseJob(text);
+    if (!loaded.ok) usage(`the job file ${run.file} does not load (${loaded.problems[0]?.where} ${loaded.problems[0]?.field}: ${loaded.problems[0]?.message})`);
+    const points = new Set(loaded.job.nodes.filter((n) => n.kind === 'point').map((n) => n.id));
+    r = { ...measureText(loaded.job.links.filter((l) => points.has(l.to)).length, text, run.file), file: run.file };
+  }
+  const circuits = r.circuits;
   sizes.push(r);
   const over = r.loadRatio > TARGETS.load || r.analyseRatio > TARGETS.analyse || r.reanalyseRatio > TARGETS.reanalyse;
-  if (circuits === 10_000 && over) failed = true;
+  if (run.file === null && circuits === 10_000 && over) failed = true;
   if (json) {
     console.log(JSON.stringify(r));
     continue;
