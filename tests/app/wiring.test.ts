@@ -6,7 +6,8 @@ import { connectParts, moveFeed } from '../../app/renderer/commands/wiring.js';
 import { feedReason } from '../../app/renderer/sheet/connect.js';
 import { connectOnRelease } from '../../app/renderer/sheet/Sheet.js';
 import { toFlowNode } from '../../app/renderer/sheet/flow.js';
-import { feedOptions } from '../../app/renderer/app/FeedPicker.js';
+import { feedOptions, selectParts } from '../../app/renderer/app/FeedPicker.js';
+import type { JobNode } from '../../engine/index.js';
 import { smallJob } from './fixture.js';
 
 function withSecondBoard() {
@@ -115,5 +116,23 @@ describe('moving a circuit to another board', () => {
     const opts = feedOptions(useEditor.getState().job.nodes, 'P1');
     expect(opts.map((o) => o.value)).toEqual(['S1', 'DB2', 'MSB', 'P2']);
     expect(opts[1]!.label).toBe('DB2 — Workshop (board)');
+  });
+});
+
+describe('the feed choice’s list of parts', () => {
+  it('stays the same array while no part is added, removed or renamed (a drag moves parts only)', () => {
+    const nodes = [
+      { id: 'S1', kind: 'supply', at: { x: 0, y: 0 } },
+      { id: 'DB1', kind: 'board', name: 'Board one', at: { x: 0, y: 100 } },
+    ] as unknown as JobNode[];
+    const first = selectParts({ job: { nodes } });
+    expect(first).toEqual(['supply\u0000S1\u0000', 'board\u0000DB1\u0000Board one']);
+    expect(selectParts({ job: { nodes } })).toBe(first);
+    const moved = nodes.map((n) => ({ ...n, at: { x: 5, y: 5 } })) as JobNode[];
+    expect(selectParts({ job: { nodes: moved } })).toBe(first);
+    const renamed = moved.map((n) => (n.id === 'DB1' ? { ...n, name: 'Board two' } : n)) as JobNode[];
+    const next = selectParts({ job: { nodes: renamed } });
+    expect(next).not.toBe(first);
+    expect(next[1]).toBe('board\u0000DB1\u0000Board two');
   });
 });

@@ -1,8 +1,7 @@
 // The "From" of a link as a choice of feeding part, so a circuit moves to another board without
 // being redrawn. A choice that would loop is refused beside the field, with the reason.
 import { useMemo } from 'react';
-import { useShallow } from 'zustand/react/shallow';
-import type { Link } from '../../../engine/index.js';
+import type { JobNode, Link } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
 import { moveFeed } from '../commands/wiring.js';
 import { SelectField } from '../panels/fields/fields.js';
@@ -20,9 +19,32 @@ export function feedOptions(nodes: ReadonlyArray<{ id: string; kind: 'supply' | 
     .map((n) => ({ value: n.id, label: `${n.id}${n.name ? ` — ${n.name}` : ''} (${n.kind})` }));
 }
 
+/**
+ * The parts' kinds, ids and names, as one text each; the same array while the nodes list is the
+ * same, and while an edit (a drag) left every part's kind, id and name as they were. No store
+ * update compares thousands of entries through a shallow equality that builds two maps.
+ */
+let partsOf: readonly JobNode[] | null = null;
+let partsKept: readonly string[] = [];
+export function selectParts(s: { job: { nodes: readonly JobNode[] } }): readonly string[] {
+  const nodes = s.job.nodes;
+  if (nodes === partsOf) return partsKept;
+  partsOf = nodes;
+  let same = nodes.length === partsKept.length;
+  const next: string[] = new Array<string>(nodes.length);
+  for (let i = 0; i < nodes.length; i++) {
+    const n = nodes[i]!;
+    const p = `${n.kind}\u0000${n.id}\u0000${n.name ?? ''}`;
+    next[i] = p;
+    if (same && partsKept[i] !== p) same = false;
+  }
+  if (!same) partsKept = next;
+  return partsKept;
+}
+
 export function FeedPicker({ link }: { link: Link }) {
   // Ids, kinds and names only: a drag or a cable edit does not re-render the list.
-  const parts = useEditor(useShallow((s) => s.job.nodes.map((n) => `${n.kind}\u0000${n.id}\u0000${n.name ?? ''}`)));
+  const parts = useEditor(selectParts);
   const toName = useEditor((s) => s.job.nodes.find((n) => n.id === link.to)?.name);
   // Worked out again only when a part is added, removed or renamed, or another link is shown
   // (thousands of options: not re-sorted, nor re-rendered, on every edit of this link's cable).

@@ -76,6 +76,9 @@ function DesignSchedule() {
   const [scrollTop, setScrollTop] = useState(0);
   const [viewHeight, setViewHeight] = useState(FALLBACK_VIEW_HEIGHT);
   const bodyRef = useRef<HTMLDivElement>(null);
+  // The body's scroll position and height as last seen (scroll events, resizes), so keeping the
+  // selected row in view after an edit reads no layout (a forced layout on every edit).
+  const seen = useRef({ top: 0, height: 0 });
 
   const rows: ScheduleRowData[] = useMemo(
     () => links.map((link, index) => ({ link, result: resultById[link.id], index })),
@@ -89,7 +92,12 @@ function DesignSchedule() {
   useLayoutEffect(() => {
     const el = bodyRef.current;
     if (!el) return;
-    const measure = () => setViewHeight(el.clientHeight > 0 ? el.clientHeight : FALLBACK_VIEW_HEIGHT);
+    const measure = () => {
+      const height = el.clientHeight;
+      seen.current.height = height;
+      seen.current.top = el.scrollTop;
+      setViewHeight(height > 0 ? height : FALLBACK_VIEW_HEIGHT);
+    };
     measure();
     if (typeof ResizeObserver === 'undefined') return;
     const ro = new ResizeObserver(measure);
@@ -105,8 +113,13 @@ function DesignSchedule() {
     const at = shown.findIndex((row) => row.link.id === firstSelected);
     if (at < 0) return;
     const top = at * ROW_HEIGHT;
-    if (top < el.scrollTop || top + ROW_HEIGHT > el.scrollTop + el.clientHeight) {
-      if (windowed || el.clientHeight > 0) el.scrollTop = Math.max(0, top - el.clientHeight / 2);
+    const { top: scrolled, height } = seen.current;
+    if (top < scrolled || top + ROW_HEIGHT > scrolled + height) {
+      if (windowed || height > 0) {
+        const to = Math.max(0, top - height / 2);
+        el.scrollTop = to;
+        seen.current.top = to;
+      }
     }
   }, [firstSelected, shown, windowed]);
 
@@ -141,7 +154,10 @@ function DesignSchedule() {
       </header>
       <SizeList id={SIZES_ID} />
       <div className="lwp-schedule-body" ref={bodyRef} data-windowed={windowed ? 'true' : 'false'}
-        onScroll={(e) => setScrollTop(e.currentTarget.scrollTop)}>
+        onScroll={(e) => {
+          seen.current.top = e.currentTarget.scrollTop;
+          setScrollTop(seen.current.top);
+        }}>
         <table className="lwp-schedule-table">
           <thead>
             <tr>
