@@ -15,6 +15,7 @@ import { AboutDialog, ProblemsDialog } from './dialogs.js';
 import { FindDialog } from './FindDialog.js';
 import { AddCircuitsDialog, ConnectDialog } from './WorkDialogs.js';
 import { ContextMenu } from './ContextMenu.js';
+import { FeedList } from './FeedPicker.js';
 import { RestoreBanner } from './RestoreBanner.js';
 import { Splitter } from './Splitter.js';
 import { useUi, type UiState } from './ui.js';
@@ -168,6 +169,7 @@ export function App() {
       <ConnectDialog />
       <AboutDialog />
       <ProblemsDialog />
+      <FeedList />
     </ReactFlowProvider>
   );
 }

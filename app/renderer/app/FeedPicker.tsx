@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import type { JobNode, Link } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
 import { moveFeed } from '../commands/wiring.js';
-import { SelectField } from '../panels/fields/fields.js';
+import { SelectField, TextField } from '../panels/fields/fields.js';
 
 const ORDER = { supply: 0, board: 1, point: 2 } as const;
 /** One collator for every comparison (localeCompare with options builds one per call). */
@@ -17,6 +17,33 @@ export function feedOptions(nodes: ReadonlyArray<{ id: string; kind: 'supply' | 
     .slice()
     .sort((a, b) => ORDER[a.kind] - ORDER[b.kind] || IDS.compare(a.id, b.id))
     .map((n) => ({ value: n.id, label: `${n.id}${n.name ? ` — ${n.name}` : ''} (${n.kind})` }));
+}
+
+/** Past this many parts to choose from, the feed is typed (with suggestions) instead of chosen from a list box. */
+export const FEED_SELECT_LIMIT = 300;
+/** The id of the one list of parts offered while typing a feed (FeedList). */
+export const FEEDS_LIST_ID = 'lw-feed-parts';
+
+/**
+ * The parts offered while a feed is typed on a large job: one list for the whole page, drawn
+ * again only when a part is added, removed or renamed (not each time a link is shown).
+ */
+export function FeedList() {
+  const parts = useEditor(selectParts);
+  const options = useMemo(() => {
+    if (parts.length <= FEED_SELECT_LIMIT) return null;
+    const nodes = parts.map((p) => {
+      const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
+      return { id, kind, ...(name ? { name } : {}) };
+    });
+    return feedOptions(nodes, '');
+  }, [parts]);
+  if (options === null) return null;
+  return (
+    <datalist id={FEEDS_LIST_ID} data-feed-list>
+      {options.map((o) => <option key={o.value} value={o.value} label={o.label} />)}
+    </datalist>
+  );
 }
 
 /**
@@ -48,22 +75,31 @@ export function FeedPicker({ link }: { link: Link }) {
   const toName = useEditor((s) => s.job.nodes.find((n) => n.id === link.to)?.name);
   // Worked out again only when a part is added, removed or renamed, or another link is shown
   // (thousands of options: not re-sorted, nor re-rendered, on every edit of this link's cable).
-  const nodes = useMemo(() => parts.map((p) => {
+  const nodes = useMemo(() => (parts.length > FEED_SELECT_LIMIT ? [] : parts).map((p) => {
     const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
     return { id, kind, ...(name ? { name } : {}) };
   }), [parts]);
+  // The same test as FeedList's: past the limit, the one shared list of parts is offered.
+  const typed = parts.length > FEED_SELECT_LIMIT;
   const options = useMemo(() => {
+    if (typed) return [];
     const list = feedOptions(nodes, link.to);
     if (!nodes.some((n) => n.id === link.from)) list.unshift({ value: link.from, label: `${link.from} (not in the job)` });
     return list;
-  }, [nodes, link.to, link.from]);
+  }, [nodes, link.to, link.from, typed]);
   const id = link.id;
   const from = link.from;
-  const field = useMemo(() => (
+  const field = useMemo(() => (typed ? (
+    // Thousands of parts: the id is typed, with the parts offered as it is (the shared FeedList).
+    // A list box of thousands of options costs a long layout each time a link is shown.
+    <TextField field="from" label="From (fed by)" value={from} list={FEEDS_LIST_ID}
+      hint="Type or pick the id of another board or point to move this circuit; nothing is redrawn."
+      onCommit={(to) => (to === undefined ? { ok: false, reason: 'give the id of the board or point that feeds it' } : moveFeed(id, to.trim()))} />
+  ) : (
     <SelectField field="from" label="From (fed by)" value={from} options={options}
       hint="Choose another board or point to move this circuit; nothing is redrawn."
       onCommit={(to) => moveFeed(id, to)} />
-  ), [from, options, id]);
+  )), [from, options, id, typed]);
   return (
     <>
       {field}

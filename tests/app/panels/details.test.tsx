@@ -4,7 +4,8 @@ import { STANDARD_SIZES } from '../../../engine/index.js';
 import { DetailsPanel } from '../../../app/renderer/panels/index.js';
 import { useEditor } from '../../../app/renderer/store/index.js';
 import { choose, field, fieldError, typeAndBlur, typeAndEnter } from './dom.js';
-import { linkOf, load, sampleJob } from './fixture.js';
+import { largeJob, linkOf, load, sampleJob } from './fixture.js';
+import { FeedList } from '../../../app/renderer/app/FeedPicker.js';
 
 function selectLink(id: string) {
   act(() => useEditor.getState().select({ nodes: [], links: [id] }));
@@ -302,5 +303,41 @@ describe('details panel for nodes and several elements', () => {
     fireEvent.click(container.querySelector('[data-action="show-breakdown"]')!);
     expect(useEditor.getState().breakdownLink).toBe('C1');
     expect(useEditor.getState().highlightPath).toEqual(['S1', 'M1', 'MSB', 'C1', 'P1']);
+  });
+});
+
+describe('the feed of a link on a large job', () => {
+  beforeEach(() => {
+    // A board of its own to move circuits to, beside the main switchboard (invented data).
+    const job = largeJob(400);
+    load({ ...job, nodes: [...job.nodes, { id: 'DB2', kind: 'board', name: 'Second board', at: { x: 0, y: 500 } }],
+      links: [...job.links, { id: 'SM1', from: 'MSB', to: 'DB2', cable: { length: 20, material: 'Cu', active: 10, earth: 4 } }] });
+  });
+
+  it('is typed with the parts offered from one shared list, not chosen from a list box of every part', () => {
+    const { container } = render(<><DetailsPanel /><FeedList /></>);
+    selectLink('C7');
+    const from = field(container, 'from');
+    expect(from.tagName).toBe('INPUT');
+    expect(from.value).toBe('MSB');
+    const list = container.querySelector(`datalist#${from.getAttribute('list')}`)!;
+    expect(list).toBeTruthy();
+    // Every part (403 nodes: the supply, two boards, 400 points), supplies and boards first.
+    const offered = [...list.querySelectorAll('option')].map((o) => o.value);
+    expect(offered).toHaveLength(403);
+    expect(offered.slice(0, 3)).toEqual(['S1', 'DB2', 'MSB']);
+    // The list stays the one element as another link is shown.
+    selectLink('C8');
+    expect(container.querySelector('[data-feed-list]')).toBe(list);
+  });
+
+  it('moves the circuit when an id is typed, and refuses an id that is no part, saying why', () => {
+    const { container } = render(<><DetailsPanel /><FeedList /></>);
+    selectLink('C7');
+    typeAndEnter(field(container, 'from'), 'NOPE');
+    expect(fieldError(container, 'from')?.textContent).toMatch(/there is no node NOPE/);
+    expect(linkOf('C7').from).toBe('MSB');
+    typeAndEnter(field(container, 'from'), 'DB2');
+    expect(linkOf('C7').from).toBe('DB2');
   });
 });

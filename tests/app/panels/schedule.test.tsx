@@ -1,4 +1,4 @@
-import { fireEvent, render } from '@testing-library/react';
+import { act, fireEvent, render } from '@testing-library/react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { SchedulePanel } from '../../../app/renderer/panels/index.js';
 import { sortRows, type ScheduleRowData } from '../../../app/renderer/panels/schedule/columns.js';
@@ -200,5 +200,21 @@ describe('circuit schedule', () => {
     const ids = rowIds(big.container);
     expect(ids.length).toBeLessThan(100);
     expect(ids).toContain('M1'); // unchecked, so last in the ratio order
+  });
+
+  it('scrolls to a row selected elsewhere (the sheet), at the next frame', async () => {
+    load(largeJob(2000));
+    const { container } = render(<SchedulePanel />);
+    const body = container.querySelector('.lwp-schedule-body') as HTMLElement;
+    expect(body.scrollTop).toBe(0);
+    const order = rowIds(container); // the first rows drawn, ratio order
+    expect(order.length).toBeGreaterThan(10);
+    // The last row in the ratio order (unchecked M1), far below the rows drawn.
+    act(() => useEditor.getState().select({ nodes: [], links: ['M1'] }));
+    expect(body.scrollTop).toBe(0); // not yet: at the next frame
+    await act(() => new Promise<void>((ok) => requestAnimationFrame(() => ok())));
+    expect(body.scrollTop).toBe(2000 * 34); // row 2001 of 2001, no view height in jsdom
+    fireEvent.scroll(body, { target: { scrollTop: 2000 * 34 } });
+    expect(rowIds(container)).toContain('M1');
   });
 });

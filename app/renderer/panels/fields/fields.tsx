@@ -185,6 +185,8 @@ export interface TextFieldProps extends Common {
   emptyAs?: 'undefined' | 'empty';
   multiline?: boolean;
   placeholder?: string;
+  /** id of a <datalist> offering values (single-line fields). */
+  list?: string;
 }
 
 function TextFieldView(props: TextFieldProps) {
@@ -213,7 +215,7 @@ function TextFieldView(props: TextFieldProps) {
         <textarea {...common} rows={3} onChange={(e) => setText(e.target.value)}
           onKeyDown={(e) => e.key === 'Escape' && revert()} />
       ) : (
-        <input {...common} type="text" onChange={(e) => setText(e.target.value)}
+        <input {...common} type="text" list={props.list} onChange={(e) => setText(e.target.value)}
           onKeyDown={(e) => {
             if (e.key === 'Enter') run();
             else if (e.key === 'Escape') revert();

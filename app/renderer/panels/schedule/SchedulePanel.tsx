@@ -117,10 +117,18 @@ function DesignSchedule() {
     if (top < scrolled || top + ROW_HEIGHT > scrolled + height) {
       if (windowed || height > 0) {
         const to = Math.max(0, top - height / 2);
-        el.scrollTop = to;
         seen.current.top = to;
+        // At the next frame: writing scrollTop lays the page out at once, and an edit's new
+        // statuses (the sheet, the row) should not wait for that.
+        const scroll = () => {
+          el.scrollTop = to;
+        };
+        if (typeof requestAnimationFrame !== 'function') return void scroll();
+        const frame = requestAnimationFrame(scroll);
+        return () => cancelAnimationFrame(frame);
       }
     }
+    return undefined;
   }, [firstSelected, shown, windowed]);
 
   const [first, last] = windowed ? windowRange(shown.length, scrollTop, viewHeight) : [0, shown.length];
