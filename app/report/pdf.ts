@@ -149,9 +149,11 @@ function batchContent(doc: PDFKit.PDFDocument): void {
   let kept: string[] = [];
   const flush = (): void => {
     if (kept.length === 0) return;
-    const text = kept.join('\n');
+    // As bytes: pdfkit turns text into bytes a character at a time (each code's low byte, and a
+    // line end after); Buffer's latin1 encoding gives the same bytes natively.
+    const bytes = Buffer.from(`${kept.join('\n')}\n`, 'latin1');
     kept = [];
-    write(text);
+    write(bytes as unknown as string);
   };
   doc.addContent = (data: unknown) => {
     if (typeof data === 'string') kept.push(data);
