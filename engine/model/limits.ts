@@ -104,30 +104,61 @@ export function checkLimits(text: string): Problem | null {
  * that it names the path and the line and column.
  */
 export function checkValueLimits(value: unknown, text: string): Problem | null {
-  const stack: unknown[] = [value];
+  // A stack of open containers: a list stays on it while its items are walked (by `next`), so
+  // a list of 90,000 records is never copied onto it; an object is replaced by its members that
+  // are containers (a few). The stack stays as short as the nesting is deep.
+  const open: unknown[] = [value];
   const depths: number[] = [1];
+  const next: number[] = [0];
   let items = 0;
-  while (stack.length > 0) {
-    const v = stack.pop();
-    const depth = depths.pop() ?? 1;
-    if (typeof v !== 'object' || v === null) continue;
-    if (depth > LIMITS.depth) return scanLimits(text) ?? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`);
+  const deep = (): Problem => scanLimits(text) ?? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`);
+  while (open.length > 0) {
+    const top = open.length - 1;
+    const v = open[top];
+    const depth = depths[top]!;
+    if (typeof v !== 'object' || v === null) {
+      open.pop();
+      depths.pop();
+      next.pop();
+      continue;
+    }
     if (Array.isArray(v)) {
-      items += v.length;
-      if (items > LIMITS.elements) return scanLimits(text) ?? problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`);
-      for (const x of v) {
+      let i = next[top]!;
+      if (i === 0) {
+        if (depth > LIMITS.depth) return deep();
+        items += v.length;
+        if (items > LIMITS.elements) return scanLimits(text) ?? problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`);
+      }
+      let child: unknown = null;
+      while (i < v.length) {
+        const x: unknown = v[i++];
         if (typeof x === 'object' && x !== null) {
-          stack.push(x);
-          depths.push(depth + 1);
+          child = x;
+          break;
         }
       }
-    } else {
-      for (const key in v) {
-        const x = (v as Record<string, unknown>)[key];
-        if (typeof x === 'object' && x !== null) {
-          stack.push(x);
-          depths.push(depth + 1);
-        }
+      if (child === null) {
+        open.pop();
+        depths.pop();
+        next.pop();
+        continue;
+      }
+      next[top] = i;
+      open.push(child);
+      depths.push(depth + 1);
+      next.push(0);
+      continue;
+    }
+    open.pop();
+    depths.pop();
+    next.pop();
+    if (depth > LIMITS.depth) return deep();
+    for (const key in v) {
+      const x = (v as Record<string, unknown>)[key];
+      if (typeof x === 'object' && x !== null) {
+        open.push(x);
+        depths.push(depth + 1);
+        next.push(0);
       }
     }
   }

@@ -75,6 +75,38 @@ export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS
   return validateFile(migrated.file, migrated.migratedFrom);
 }
 
+/**
+ * The records of a list that pass their own checks (each is the parsed object itself), and the
+ * place of each in the file once one has not (null while every record passed, so positions are
+ * places). While every record passes, the list is the file's own list, not a copy.
+ */
+function keptRecords<R>(
+  raw: unknown[],
+  validate: (value: unknown, index: number, problems: Problem[]) => R | undefined,
+  problems: Problem[],
+): { records: R[]; at: number[] | null } {
+  let records: R[] | null = null; // null: so far every record passed, and raw is the list
+  let at: number[] | null = null;
+  for (let index = 0; index < raw.length; index++) {
+    // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
+    // an edit touched, each at its own index in otherwise empty lists).
+    const present = index in raw;
+    const record = present ? validate(raw[index], index, problems) : undefined;
+    if (records === null) {
+      if (record !== undefined) continue;
+      // The first record left out: the ones before it are kept, each at its own place.
+      records = raw.slice(0, index) as R[];
+      at = records.map((_, i) => i);
+      continue;
+    }
+    if (record !== undefined) {
+      records.push(record);
+      at!.push(index);
+    }
+  }
+  return records === null ? { records: raw as R[], at: null } : { records, at };
+}
+
 function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   const problems: Problem[] = [];
   const top = new Site(problems, 'file');
@@ -82,52 +114,14 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   const rules = validateRules(file.rules, new Site(problems, 'rules'));
 
   // The records that pass their own checks, and (only once one has not) the place of each.
-  const nodes: JobNode[] = [];
-  const links: Link[] = [];
+  let nodes: JobNode[] = [];
+  let links: Link[] = [];
   let nodeAt: number[] | null = null;
   let linkAt: number[] | null = null;
   if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes (use [] for none)', file.nodes);
-  else {
-    const raw: unknown[] = file.nodes;
-    for (let index = 0; index < raw.length; index++) {
-      // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
-      // an edit touched, each at its own index in otherwise empty lists).
-      if (!(index in raw)) {
-        nodeAt ??= nodes.map((_, i) => i);
-        continue;
-      }
-      const node = validateNode(raw[index], index, problems);
-      if (node !== undefined && nodeAt === null && nodes.length === index) nodes.push(node);
-      else {
-        nodeAt ??= nodes.map((_, i) => i);
-        if (node !== undefined) {
-          nodes.push(node);
-          nodeAt.push(index);
-        }
-      }
-    }
-  }
+  else ({ records: nodes, at: nodeAt } = keptRecords(file.nodes, validateNode, problems));
   if (!Array.isArray(file.links)) top.bad('links', 'a list of links (use [] for none)', file.links);
-  else {
-    const raw: unknown[] = file.links;
-    for (let index = 0; index < raw.length; index++) {
-      // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
-      // an edit touched, each at its own index in otherwise empty lists).
-      if (!(index in raw)) {
-        linkAt ??= links.map((_, i) => i);
-        continue;
-      }
-      const link = validateLink(raw[index], index, problems);
-      if (link !== undefined && linkAt === null && links.length === index) links.push(link);
-      else {
-        linkAt ??= links.map((_, i) => i);
-        if (link !== undefined) {
-          links.push(link);
-          linkAt.push(index);
-        }
-      }
-    }
-  }
+  else ({ records: links, at: linkAt } = keptRecords(file.links, validateLink, problems));
   const graph = checkGraph(nodes, nodeAt, links, linkAt, problems);
   if (!problems.some((p) => p.severity === 'error')) checkPhases(nodes, links, graph, problems);
   const sizes = sizeWarnings(links, linkAt);
