@@ -6,6 +6,7 @@ import { ReactFlowProvider } from '@xyflow/react';
 import { analyse, parseJob } from '../../engine/index.js';
 import { Sheet } from '../../app/renderer/sheet/Sheet.js';
 import { cableLine, resultLine, statusText } from '../../app/renderer/sheet/labels.js';
+import { flowList, sameEdge, sheetDecor, toFlowEdge } from '../../app/renderer/sheet/flow.js';
 import { useEditor } from '../../app/renderer/store/index.js';
 import { smallJob } from './fixture.js';
 
@@ -40,6 +41,37 @@ describe('the sheet', () => {
     expect(container.querySelector('[data-link-label="C1"]')?.textContent).toContain('✗ FAIL');
     act(() => useEditor.getState().undo());
     expect(status()).toBe('pass');
+  });
+
+  it('reads a link out by its label (id, ends) and its status as its description, which follows an edit', () => {
+    const { container } = renderSheet();
+    const edge = container.querySelector('.react-flow__edge[data-id="C1"]') ?? container.querySelector('[data-testid="rf__edge-C1"]');
+    expect(edge?.getAttribute('aria-label')).toMatch(/^Link C1( ".*")?, MSB to P1$/);
+    const described = () => container.querySelector(`[id="${edge!.getAttribute('aria-describedby')}"]`)?.textContent;
+    expect(described()).toBe('✓ pass');
+    act(() => {
+      useEditor.getState().apply({ op: 'update-link', id: 'C1', patch: { cable: { length: 300, material: 'Cu', active: 2.5, earth: 2.5 } } });
+    });
+    expect(described()).toBe('✗ FAIL');
+  });
+
+  it('leaves React Flow the same edges list after a cable edit, even one that changes a status', () => {
+    const job = useEditor.getState().job;
+    const list = flowList(toFlowEdge, sameEdge);
+    const before = list(job.links, [], sheetDecor(job, useEditor.getState().resultById));
+    act(() => {
+      useEditor.getState().apply({ op: 'update-link', id: 'C1', patch: { cable: { length: 300, material: 'Cu', active: 2.5, earth: 2.5 } } });
+    });
+    const after = useEditor.getState();
+    expect(after.resultById.C1?.status).toBe('fail');
+    expect(after.job.links).not.toBe(job.links);
+    expect(list(after.job.links, [], sheetDecor(after.job, after.resultById))).toBe(before);
+    // A new name reads out differently: a new edge.
+    act(() => void useEditor.getState().apply({ op: 'update-link', id: 'C1', patch: { name: 'Renamed' } }));
+    const renamed = useEditor.getState();
+    const next = list(renamed.job.links, [], sheetDecor(renamed.job, renamed.resultById));
+    expect(next).not.toBe(before);
+    expect(next.find((e) => e.id === 'C1')?.ariaLabel).toContain('"Renamed"');
   });
 
   it('labels each link with device, cable, result and status by symbol and word', () => {

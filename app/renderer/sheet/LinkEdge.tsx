@@ -5,6 +5,7 @@
 // node it feeds.
 import { memo } from 'react';
 import { BaseEdge, EdgeLabelRenderer, useStore, type EdgeProps, type ReactFlowState } from '@xyflow/react';
+import { STATUS_READ, statusDescriptionId } from './flow.js';
 import { useEditor } from '../store/editor.js';
 import { selectLink, selectNode, selectResult } from '../store/selectors.js';
 import { NODE_SIZE } from './parts.js';
@@ -58,6 +59,7 @@ function LinkEdgeView({ id, target, sourceX, sourceY, targetX, targetY, selected
   return (
     <>
       <g className={cls} data-link-id={id} data-status={status} data-verdict={verdict}>
+        <desc id={statusDescriptionId(id)}>{STATUS_READ[status] ?? status}</desc>
         <BaseEdge id={id} path={g.path} interactionWidth={14} />
       </g>
       <EdgeLabelRenderer>

@@ -10,7 +10,7 @@ import { useEditor } from '../store/editor.js';
 import { connectParts } from '../commands/wiring.js';
 import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
-import { flowList, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
+import { flowList, sameEdge, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
 import { selectSearchable } from '../store/selectors.js';
 import { getSheetHandle, setSheetHandle } from './handle.js';
 import { NODE_SIZE, newPart } from './parts.js';
@@ -109,7 +109,7 @@ export function Sheet({ onContextMenu }: SheetProps) {
 
   // Incremental: a drag frame replaces only the moved nodes; the links' array stays the same one.
   const nodeList = useMemo(() => flowList<(typeof jobNodes)[number], Node>(toFlowNode), []);
-  const edgeList = useMemo(() => flowList<(typeof jobLinks)[number], Edge>(toFlowEdge), []);
+  const edgeList = useMemo(() => flowList<(typeof jobLinks)[number], Edge>(toFlowEdge, sameEdge), []);
   // Read-out names and the not-fed flag: rebuilt when an id, name, end or result changes, not on a drag frame.
   const searchable = useEditor(selectSearchable);
   const resultById = useEditor((s) => s.resultById);

@@ -55,19 +55,39 @@ export function toFlowNode(n: JobNode, selected: boolean, decor: Decor = NO_DECO
   return node;
 }
 
+/**
+ * The id of the element that reads out a link's status (LinkEdge draws it): the status is its
+ * description, not part of the edge's label, so a new status leaves the edge object as it was
+ * and React Flow does not index every edge again after an edit. No whitespace (an id list).
+ */
+export function statusDescriptionId(linkId: string): string {
+  return `lw-status-${encodeURIComponent(linkId)}`;
+}
+
 export function toFlowEdge(l: Link, selected: boolean, decor: Decor = NO_DECOR): Edge {
   const label = decor.label.get(l.id) ?? `link ${l.id}${l.name ? ` ${l.name}` : ''}, ${l.from} to ${l.to}`;
   const hit = edgeCache.get(l);
   if (hit && hit.selected === selected && hit.label === label) return hit.edge;
-  const edge: Edge = { id: l.id, source: l.from, target: l.to, type: 'link', data: EMPTY, selected, ariaLabel: label };
+  const edge: Edge = {
+    id: l.id, source: l.from, target: l.to, type: 'link', data: EMPTY, selected, ariaLabel: label,
+    domAttributes: { 'aria-describedby': statusDescriptionId(l.id) },
+  };
   edgeCache.set(l, { selected, label, edge });
   return edge;
+}
+
+/** Two edges that draw and read the same (a cable edit: the link is a new record, its edge is not). */
+export function sameEdge(a: Edge, b: Edge): boolean {
+  return a.id === b.id && a.source === b.source && a.target === b.target && a.type === b.type && a.selected === b.selected && a.ariaLabel === b.ariaLabel;
 }
 
 /** Builds a flow array from records and the selected ids, reusing what did not change. */
 export type FlowList<R, F> = (records: readonly R[], selected: readonly string[], decor?: Decor) => F[];
 
-export function flowList<R extends { id: string }, F>(make: (record: R, selected: boolean, decor: Decor) => F): FlowList<R, F> {
+export function flowList<R extends { id: string }, F>(
+  make: (record: R, selected: boolean, decor: Decor) => F,
+  same: ((a: F, b: F) => boolean) | null = null,
+): FlowList<R, F> {
   let lastRecords: readonly R[] | null = null;
   let lastSelected: readonly string[] = [];
   let lastDecor: Decor = NO_DECOR;
@@ -99,7 +119,7 @@ export function flowList<R extends { id: string }, F>(make: (record: R, selected
       const r = records[i]!;
       if (!redecorate && r === previous[i] && !flipped?.has(r.id)) continue;
       const f = make(r, selectedSet.has(r.id), decor);
-      if (f === out[i]) continue;
+      if (f === out[i] || (same !== null && same(f, out[i]!))) continue;
       changed ??= out.slice();
       changed[i] = f;
     }
@@ -108,12 +128,12 @@ export function flowList<R extends { id: string }, F>(make: (record: R, selected
   };
 }
 
-const STATUS_READ: Record<string, string> = { pass: '✓ pass', fail: '✗ FAIL', rcd: '⚠ RCD-reliant', unchecked: '○ unchecked' };
+export const STATUS_READ: Record<string, string> = { pass: '✓ pass', fail: '✗ FAIL', rcd: '⚠ RCD-reliant', unchecked: '○ unchecked' };
 const KIND_WORD: Record<JobNode['kind'], string> = { supply: 'Supply', board: 'Board', point: 'Point' };
 
 /**
- * Which nodes nothing feeds, and what every node and link is read out as: its id, its name and
- * its status (a link's result; a node's that of the link feeding it).
+ * Which nodes nothing feeds, and what every node and link is read out as: its id and name, and
+ * for a node the status of the link feeding it (a link's own status is its description).
  */
 export function sheetDecor(
   job: { nodes: readonly JobNode[]; links: readonly Link[] },
@@ -142,9 +162,9 @@ export function sheetDecor(
     label.set(n.id, `${KIND_WORD[n.kind]} ${n.id}${name}, fed by ${feed.id}: ${status}`);
   }
   for (const l of job.links) {
+    // The status is the link's description (statusDescriptionId), drawn by the link itself.
     const name = l.name ? ` "${l.name}"` : '';
-    const status = STATUS_READ[resultById[l.id]?.status ?? 'unchecked'] ?? '○ unchecked';
-    label.set(l.id, `Link ${l.id}${name}, ${l.from} to ${l.to}: ${status}`);
+    label.set(l.id, `Link ${l.id}${name}, ${l.from} to ${l.to}`);
   }
   return { unfed, label };
 }
