@@ -7,6 +7,7 @@ import { derive } from './derive.js';
 import { idFollower } from './renames.js';
 import { firstError, describe } from './derive.js';
 import { applyEdit, EditError, onlyMoves, touchedIds, type ApplyOutcome, type Edit } from './edits.js';
+import { positionsForMissing } from '../sheet/arrange.js';
 
 export type { Edit, ApplyOutcome } from './edits.js';
 
@@ -214,8 +215,7 @@ export const useEditor = create<EditorState>()((set, get) => {
       // A job written by another tool may have no drawing positions: lay those nodes out
       // (not an edit of the user's: no undo step, and a job that was clean stays clean).
       if (job.nodes.some((n) => n.at === undefined)) {
-        void import('../sheet/arrange.js').then(async ({ positionsForMissing }) => {
-          const moves = await positionsForMissing(job);
+        void positionsForMissing(job).then((moves) => {
           if (get().job !== job || moves.length === 0) return;
           const next = applyEdit(job, { op: 'move', moves });
           if (savedJob === job) savedJob = next;
