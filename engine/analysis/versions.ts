@@ -78,21 +78,17 @@ export class Version {
 
 /** Swap the tables' values at the given entries with `saved` (the same order as derive's). */
 function swap(columns: Columns, links: Int32Array, nodes: Int32Array, saved: Float64Array): void {
-  let k = 0;
-  for (const column of columns.link) {
-    for (let i = 0; i < links.length; i++) {
-      const at = links[i]!;
-      const v = column[at]!;
-      column[at] = saved[k]!;
+  swapAt(columns.node, nodes, saved, swapAt(columns.link, links, saved, 0));
+}
+
+/** Swap each column's values at `at` with saved[k ...]; returns the next k. */
+function swapAt(columns: readonly Column[], at: Int32Array, saved: Float64Array, k: number): number {
+  for (const column of columns) {
+    for (let i = 0; i < at.length; i++) {
+      const v = column[at[i]!]!;
+      column[at[i]!] = saved[k]!;
       saved[k++] = v;
     }
   }
-  for (const column of columns.node) {
-    for (let i = 0; i < nodes.length; i++) {
-      const at = nodes[i]!;
-      const v = column[at]!;
-      column[at] = saved[k]!;
-      saved[k++] = v;
-    }
-  }
+  return k;
 }
