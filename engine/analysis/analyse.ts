@@ -143,11 +143,34 @@ function onlyLengthChanged(before: Job, after: Job): number {
   if (changed < 0) return -1;
   const a = before.links[changed]!;
   const b = after.links[changed]!;
-  const { cable: ca, ...restA } = a;
-  const { cable: cb, ...restB } = b;
-  const { length: _la, ...cableA } = ca;
-  const { length: _lb, ...cableB } = cb;
-  return JSON.stringify(restA) === JSON.stringify(restB) && JSON.stringify(cableA) === JSON.stringify(cableB) ? changed : -1;
+  return sameValue(a, b, 'cable') && sameValue(a.cable, b.cable, 'length') ? changed : -1;
+}
+
+/**
+ * Two values of a job equal as JSON (a key holding undefined counts as absent, as in the file),
+ * leaving out the key `skip` of these two objects. The records' values nest a few levels at
+ * most (the loader's limits), so the comparison recurses.
+ */
+function sameValue(x: unknown, y: unknown, skip: string | null = null): boolean {
+  if (x === y) return true;
+  if (typeof x !== 'object' || typeof y !== 'object' || x === null || y === null) return false;
+  if (Array.isArray(x) !== Array.isArray(y)) return false;
+  if (Array.isArray(x)) {
+    const ys = y as unknown[];
+    if (x.length !== ys.length) return false;
+    for (let i = 0; i < x.length; i++) if (!sameValue(x[i], ys[i])) return false;
+    return true;
+  }
+  const a = x as Record<string, unknown>;
+  const b = y as Record<string, unknown>;
+  let count = 0;
+  for (const k in a) {
+    if (k === skip || a[k] === undefined) continue;
+    count++;
+    if (!sameValue(a[k], b[k])) return false;
+  }
+  for (const k in b) if (k !== skip && b[k] !== undefined) count--;
+  return count === 0;
 }
 
 function sameItems<T>(a: readonly T[], b: readonly T[]): boolean {
