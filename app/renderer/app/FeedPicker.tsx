@@ -32,11 +32,7 @@ export function FeedList() {
   const parts = useEditor(selectParts);
   const options = useMemo(() => {
     if (parts.length <= FEED_SELECT_LIMIT) return null;
-    const nodes = parts.map((p) => {
-      const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
-      return { id, kind, ...(name ? { name } : {}) };
-    });
-    return feedOptions(nodes, '');
+    return feedOptions(partNodes(parts), '');
   }, [parts]);
   if (options === null) return null;
   return (
@@ -44,6 +40,14 @@ export function FeedList() {
       {options.map((o) => <option key={o.value} value={o.value} label={o.label} />)}
     </datalist>
   );
+}
+
+/** The parts back from their texts (selectParts). */
+function partNodes(parts: readonly string[]): Array<{ id: string; kind: 'supply' | 'board' | 'point'; name?: string }> {
+  return parts.map((p) => {
+    const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
+    return { id, kind, ...(name ? { name } : {}) };
+  });
 }
 
 /**
@@ -75,12 +79,9 @@ export function FeedPicker({ link }: { link: Link }) {
   const toName = useEditor((s) => s.job.nodes.find((n) => n.id === link.to)?.name);
   // Worked out again only when a part is added, removed or renamed, or another link is shown
   // (thousands of options: not re-sorted, nor re-rendered, on every edit of this link's cable).
-  const nodes = useMemo(() => (parts.length > FEED_SELECT_LIMIT ? [] : parts).map((p) => {
-    const [kind, id, name] = p.split('\u0000') as ['supply' | 'board' | 'point', string, string];
-    return { id, kind, ...(name ? { name } : {}) };
-  }), [parts]);
   // The same test as FeedList's: past the limit, the one shared list of parts is offered.
   const typed = parts.length > FEED_SELECT_LIMIT;
+  const nodes = useMemo(() => (typed ? [] : partNodes(parts)), [parts, typed]);
   const options = useMemo(() => {
     if (typed) return [];
     const list = feedOptions(nodes, link.to);
