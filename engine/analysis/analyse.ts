@@ -264,23 +264,19 @@ function finishOne(state: State, l: number): void {
   const link = sums.order.links[l]!;
   const result = circuits[l]!;
   const needsFixes = result.status === 'fail' || result.status === 'rcd' || result.voltageStatus === 'fail';
-  if (!needsFixes) {
-    result.verdict = verdictOf(result);
-    keepFinite(result);
-    state.ratios[l] = result.status === 'unchecked' || result.ratio === null ? NaN : result.ratio;
-    return;
+  if (needsFixes) {
+    const p = facts.protecting[l]!;
+    result.fixes = findFixes({
+      link,
+      result,
+      facts: facts.factsOf(sums.order, l),
+      rules,
+      protecting: p >= 0 ? sums.order.links[p]! : null,
+      protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
+      ib: result.designCurrent,
+      pf: result.powerFactor,
+    });
   }
-  const p = facts.protecting[l]!;
-  result.fixes = findFixes({
-    link,
-    result,
-    facts: facts.factsOf(sums.order, l),
-    rules,
-    protecting: p >= 0 ? sums.order.links[p]! : null,
-    protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
-    ib: result.designCurrent,
-    pf: result.powerFactor,
-  });
   result.verdict = verdictOf(result);
   keepFinite(result);
   state.ratios[l] = result.status === 'unchecked' || result.ratio === null ? NaN : result.ratio;
