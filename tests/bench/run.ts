@@ -160,10 +160,13 @@ function measureSize(circuits: number): SizeResult {
   return measureText(circuits, serialiseJob(job), `the generated ${circuits}-circuit job`);
 }
 
-function measureText(circuits: number, text: string, what: string): SizeResult {
+/** `circuits` null: the job's links ending at a point. */
+function measureText(given: number | null, text: string, what: string): SizeResult {
   const loaded = parseJob(text);
-  if (!loaded.ok) throw new Error(`${what} does not load: ${loaded.problems[0]?.where} ${loaded.problems[0]?.field}: ${loaded.problems[0]?.message}`);
+  if (!loaded.ok) throw new Error(`${what} does not load (${loaded.problems[0]?.where} ${loaded.problems[0]?.field}: ${loaded.problems[0]?.message})`);
   const job = loaded.job;
+  const points = new Set(job.nodes.filter((n) => n.kind === 'point').map((n) => n.id));
+  const circuits = given ?? job.links.filter((l) => points.has(l.to)).length;
   const edited = withLengthChanged(loaded.job);
   const previous = incremental?.createAnalysis(loaded.job);
   const again = incremental !== null ? () => incremental.reanalyse(previous, edited) : () => analyse(edited);
@@ -250,10 +253,11 @@ for (const run of runs) {
     } catch (e) {
       usage(`cannot read the job file ${run.file} (${e instanceof Error ? e.message : String(e)})`);
     }
-    const loaded = parseJob(text);
-    if (!loaded.ok) usage(`the job file ${run.file} does not load (${loaded.problems[0]?.where} ${loaded.problems[0]?.field}: ${loaded.problems[0]?.message})`);
-    const points = new Set(loaded.job.nodes.filter((n) => n.kind === 'point').map((n) => n.id));
-    r = { ...measureText(loaded.job.links.filter((l) => points.has(l.to)).length, text, run.file), file: run.file };
+    try {
+      r = { ...measureText(null, text, `the job file ${run.file}`), file: run.file };
+    } catch (e) {
+      usage(e instanceof Error ? e.message : String(e));
+    }
   }
   const circuits = r.circuits;
   sizes.push(r);
