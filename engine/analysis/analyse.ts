@@ -11,7 +11,7 @@ import { applyCapacity } from './capacity.js';
 import { blankResult, checkLoopInto, LoopTable } from './check.js';
 import { loadTable, type LoadTable } from './design-current.js';
 import { faultTable, faultTableWithLink, type FaultTable } from './fault-level.js';
-import { findFixes } from './fixes.js';
+import { findFixes, fixInputsOf, type FixInputs } from './fixes.js';
 import { largestSourceOf, sourcePhasor } from './headroom.js';
 import type { Complex } from './complex.js';
 import { correctedReading, correctionFactor, readingTemperature, testLimit } from './measured.js';
@@ -52,6 +52,8 @@ interface State {
   version: Version;
   /** Each supply's source phasor, by node index (filled as needed). */
   phasors: Array<Complex | undefined>;
+  /** The fixes' inputs, filled for each link that needs fixes (one object for every link). */
+  fixInputs: FixInputs | undefined;
 }
 
 export function analyse(job: Job): Results {
@@ -75,7 +77,7 @@ export function createAnalysis(job: Job): Analysis {
     link: [sums.linkRe, sums.linkIm, drops.own, headroom, ratios, facts.protecting, facts.budget, facts.beforeRe, facts.beforeIm, facts.perRe, facts.perIm, facts.zeRe, facts.zeIm, facts.zeroLoop],
     node: [sums.nodeRe, sums.nodeIm, drops.atNode, faults.imax, faults.re, faults.im],
   });
-  const state: State = { rules, sums, phases, loads, drops, faults, facts, circuits: new Array<CircuitResult>(nl), headroom, ratios, version, phasors: [] };
+  const state: State = { rules, sums, phases, loads, drops, faults, facts, circuits: new Array<CircuitResult>(nl), headroom, ratios, version, phasors: [], fixInputs: undefined };
   for (let l = 0; l < job.links.length; l++) checkOne(state, l);
   // Fixes need the protecting link's design current, known only now.
   for (let l = 0; l < job.links.length; l++) finishOne(state, l);
@@ -261,21 +263,13 @@ function phasorOf(state: State, s: number): Complex {
 /** The fixes and the verdict of link l, once every link's design current is known. */
 function finishOne(state: State, l: number): void {
   const { sums, circuits, facts, rules } = state;
-  const link = sums.order.links[l]!;
   const result = circuits[l]!;
   const needsFixes = result.status === 'fail' || result.status === 'rcd' || result.voltageStatus === 'fail';
   if (needsFixes) {
     const p = facts.protecting[l]!;
-    result.fixes = findFixes({
-      link,
-      result,
-      facts: facts.factsOf(sums.order, l),
-      rules,
-      protecting: p >= 0 ? sums.order.links[p]! : null,
-      protectingIb: p >= 0 ? circuits[p]!.designCurrent : null,
-      ib: result.designCurrent,
-      pf: result.powerFactor,
-    });
+    const x = fixInputsOf(facts, sums.order, l, result, rules, p >= 0 ? circuits[p]!.designCurrent : null, state.fixInputs);
+    state.fixInputs = x;
+    result.fixes = findFixes(x);
   }
   result.verdict = verdictOf(result);
   keepFinite(result);
