@@ -18,6 +18,7 @@ export { loopBreakdown } from './analysis/breakdown.js';
 export type { ResolvedRules, RuleValue } from './analysis/basis.js';
 export { resolveRules } from './analysis/basis.js';
 export { linkRole, faultPath } from './analysis/network.js';
+export { roleOfEnds } from './analysis/order.js';
 export { deviceMark } from './analysis/devices.js';
 export { CAUTION } from './caution.js';
 export type { ReportOptions, Sheet } from './report/index.js';

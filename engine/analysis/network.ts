@@ -2,13 +2,14 @@
 // fault path of a link from the top of its tree down to its far end.
 
 import type { Job } from '../model/types.js';
-import { TreeOrder } from './order.js';
+import { roleOfEnds, TreeOrder } from './order.js';
 import type { LinkRole } from './results.js';
 
 export function linkRole(job: Job, linkId: string): LinkRole {
-  const index = job.links.findIndex((l) => l.id === linkId);
-  if (index < 0) throw new Error(`no link ${linkId} in this job`);
-  return new TreeOrder(job).roles[index]!;
+  const link = job.links.find((l) => l.id === linkId);
+  if (!link) throw new Error(`no link ${linkId} in this job`);
+  const kindOf = (id: string) => job.nodes.find((n) => n.id === id)?.kind;
+  return roleOfEnds(kindOf(link.from), kindOf(link.to));
 }
 
 /**

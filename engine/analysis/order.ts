@@ -6,8 +6,16 @@
 // them from their own topmost node, so their loads still roll up. A node inside a cycle (only in
 // a job the validator would refuse) is left out of the order.
 
-import type { Job, JobNode, Link, SupplyNode } from '../model/types.js';
+import type { Job, JobNode, Link, NodeKind, SupplyNode } from '../model/types.js';
 import type { LinkRole } from './results.js';
+
+/** A link's role from the kinds of its two ends (undefined for an end that is not in the job):
+ *  into a point it is a final subcircuit, out of a supply the consumer mains, else a submain. */
+export function roleOfEnds(fromKind: NodeKind | undefined, toKind: NodeKind | undefined): LinkRole {
+  if (toKind === 'point') return 'final-subcircuit';
+  if (fromKind === 'supply') return 'consumer-mains';
+  return 'submain';
+}
 
 /** What the loader worked out about a job's ids, by the nodes list it was worked out for. */
 interface SharedIds {
@@ -169,12 +177,10 @@ export class TreeOrder {
       if (parent >= 0 && this.prePosition[parent]! >= 0 && this.prePosition[parent]! < k) this.subtreeSize[parent]! += this.subtreeSize[n]!;
     }
 
-    this.roles = links.map((link, l) => {
+    this.roles = links.map((_, l) => {
       const to = this.linkTo[l]!;
       const from = this.linkFrom[l]!;
-      if (to >= 0 && nodes[to]!.kind === 'point') return 'final-subcircuit';
-      if (from >= 0 && nodes[from]!.kind === 'supply') return 'consumer-mains';
-      return 'submain';
+      return roleOfEnds(from >= 0 ? nodes[from]!.kind : undefined, to >= 0 ? nodes[to]!.kind : undefined);
     });
   }
 

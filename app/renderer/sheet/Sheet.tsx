@@ -10,7 +10,7 @@ import { useEditor } from '../store/editor.js';
 import { connectParts } from '../commands/wiring.js';
 import { edgeTypes } from './LinkEdge.js';
 import { nodeTypes } from './nodes.js';
-import { flowList, sameEdge, sheetDecor, toFlowEdge, toFlowNode } from './flow.js';
+import { decorKeeper, flowList, sameEdge, toFlowEdge, toFlowNode } from './flow.js';
 import { selectSearchable } from '../store/selectors.js';
 import { getSheetHandle, setSheetHandle } from './handle.js';
 import { NODE_SIZE, newPart } from './parts.js';
@@ -113,7 +113,8 @@ export function Sheet({ onContextMenu }: SheetProps) {
   // Read-out names and the not-fed flag: rebuilt when an id, name, end or result changes, not on a drag frame.
   const searchable = useEditor(selectSearchable);
   const resultById = useEditor((s) => s.resultById);
-  const decor = useMemo(() => sheetDecor(searchable, resultById), [searchable, resultById]);
+  const decorOf = useMemo(() => decorKeeper(), []);
+  const decor = useMemo(() => decorOf(searchable, resultById), [decorOf, searchable, resultById]);
   const nodes = nodeList(jobNodes, selection.nodes, decor);
   const edges = edgeList(jobLinks, selection.links, decor);
 

@@ -14,15 +14,49 @@ const HANDLE = 8;
 const nodeCache = new WeakMap<JobNode, { selected: boolean; unfed: boolean; label: string; node: Node }>();
 const edgeCache = new WeakMap<Link, { selected: boolean; label: string; edge: Edge }>();
 
+/** Accessible names by id: a map of its own over the names of the decor it came from. */
+export interface LabelLookup {
+  get(id: string): string | undefined;
+}
+
 /** What a node or link is read out as, and whether a node is fed: worked out once per edit. */
 export interface Decor {
   /** Nodes no link feeds (a point or board drawn but not connected). */
   unfed: ReadonlySet<string>;
   /** Accessible names by id (id, name and status), for the nodes and links. */
-  label: ReadonlyMap<string, string>;
+  label: LabelLookup;
+  /** Set when this decor is `base` with only these ids read out anew (a status changed). */
+  changedFrom?: { base: Decor; ids: ReadonlySet<string> };
 }
 
 const NO_DECOR: Decor = { unfed: new Set(), label: new Map() };
+
+/** Names of its own over a base's; after a few layers they are merged into one map again. */
+class LayeredLabels implements LabelLookup {
+  readonly depth: number;
+  constructor(
+    private readonly own: ReadonlyMap<string, string>,
+    private readonly base: LabelLookup,
+  ) {
+    this.depth = base instanceof LayeredLabels ? base.depth + 1 : 1;
+  }
+
+  get(id: string): string | undefined {
+    return this.own.get(id) ?? this.base.get(id);
+  }
+}
+
+/** Merges a stack of layers into one map (the base a layer sits on is a plain map). */
+function flatten(labels: LabelLookup, ids: Iterable<string>): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const id of ids) {
+    const v = labels.get(id);
+    if (v !== undefined) out.set(id, v);
+  }
+  return out;
+}
+
+const MAX_LAYERS = 8;
 
 function handles(kind: JobNode['kind']): NodeHandle[] {
   const { width, height } = NODE_SIZE[kind];
@@ -105,8 +139,10 @@ export function flowList<R extends { id: string }, F>(
       selectedSet = next;
       lastSelected = selected;
     }
-    // New decoration (an edit changed results or feeds): every entry is asked, the unchanged come back from the cache.
+    // New decoration (an edit changed results or feeds): every entry is asked, the unchanged come
+    // back from the cache; when it differs from the last one in a few ids only, just those.
     const redecorate = decor !== lastDecor;
+    const only = redecorate && decor.changedFrom?.base === lastDecor ? decor.changedFrom.ids : null;
     lastDecor = decor;
     const previous = lastRecords;
     lastRecords = records;
@@ -117,7 +153,7 @@ export function flowList<R extends { id: string }, F>(
     let changed: F[] | null = null;
     for (let i = 0; i < records.length; i++) {
       const r = records[i]!;
-      if (!redecorate && r === previous[i] && !flipped?.has(r.id)) continue;
+      if ((!redecorate || (only !== null && !only.has(r.id))) && r === previous[i] && !flipped?.has(r.id)) continue;
       const f = make(r, selectedSet.has(r.id), decor);
       if (f === out[i] || (same !== null && same(f, out[i]!))) continue;
       changed ??= out.slice();
@@ -131,20 +167,33 @@ export function flowList<R extends { id: string }, F>(
 export const STATUS_READ: Record<string, string> = { pass: '✓ pass', fail: '✗ FAIL', rcd: '⚠ RCD-reliant', unchecked: '○ unchecked' };
 const KIND_WORD: Record<JobNode['kind'], string> = { supply: 'Supply', board: 'Board', point: 'Point' };
 
-/**
- * Which nodes nothing feeds, and what every node and link is read out as: its id and name, and
- * for a node the status of the link feeding it (a link's own status is its description).
- */
-export function sheetDecor(
-  job: { nodes: readonly JobNode[]; links: readonly Link[] },
-  resultById: Readonly<Record<string, { status: string } | undefined>>,
-): Decor {
+type Searchable = { nodes: readonly JobNode[]; links: readonly Link[] };
+type ResultsById = Readonly<Record<string, { status: string } | undefined>>;
+
+function statusWords(resultById: ResultsById, linkId: string): string {
+  return STATUS_READ[resultById[linkId]?.status ?? 'unchecked'] ?? '○ unchecked';
+}
+
+function fedLabel(n: JobNode, feedId: string, resultById: ResultsById): string {
+  const name = n.name ? ` "${n.name}"` : '';
+  return `${KIND_WORD[n.kind]} ${n.id}${name}, fed by ${feedId}: ${statusWords(resultById, feedId)}`;
+}
+
+/** A full decor, and what a later one needs to redo only the nodes whose feeder's status moved. */
+interface Built {
+  decor: Decor;
+  /** Each fed node that is not a supply, by the id of the link feeding it. */
+  fed: Map<string, JobNode>;
+}
+
+function buildDecor(job: Searchable, resultById: ResultsById): Built {
   const feeder = new Map<string, Link>();
   for (const l of job.links) if (!feeder.has(l.to)) feeder.set(l.to, l);
   const fanOut = new Map<string, number>();
   for (const l of job.links) fanOut.set(l.from, (fanOut.get(l.from) ?? 0) + 1);
   const unfed = new Set<string>();
   const label = new Map<string, string>();
+  const fed = new Map<string, JobNode>();
   for (const n of job.nodes) {
     const name = n.name ? ` "${n.name}"` : '';
     if (n.kind === 'supply') {
@@ -158,13 +207,59 @@ export function sheetDecor(
       label.set(n.id, `${KIND_WORD[n.kind]} ${n.id}${name}: ⚠ not fed, nothing connects to it`);
       continue;
     }
-    const status = STATUS_READ[resultById[feed.id]?.status ?? 'unchecked'] ?? '○ unchecked';
-    label.set(n.id, `${KIND_WORD[n.kind]} ${n.id}${name}, fed by ${feed.id}: ${status}`);
+    if (!label.has(n.id)) fed.set(feed.id, n);
+    label.set(n.id, fedLabel(n, feed.id, resultById));
   }
   for (const l of job.links) {
     // The status is the link's description (statusDescriptionId), drawn by the link itself.
     const name = l.name ? ` "${l.name}"` : '';
     label.set(l.id, `Link ${l.id}${name}, ${l.from} to ${l.to}`);
   }
-  return { unfed, label };
+  return { decor: { unfed, label }, fed };
+}
+
+/**
+ * Which nodes nothing feeds, and what every node and link is read out as: its id and name, and
+ * for a node the status of the link feeding it (a link's own status is its description).
+ */
+export function sheetDecor(job: Searchable, resultById: ResultsById): Decor {
+  return buildDecor(job, resultById).decor;
+}
+
+/**
+ * sheetDecor for the sheet, kept across edits: while the ids, names and ends stay the same
+ * object (selectSearchable), a new set of results redoes only the nodes whose feeding link's
+ * status changed, and hands back the last decor itself when none did. Every other name stays
+ * the very same string, so nothing the size of the job is rebuilt or compared on an edit.
+ */
+export function decorKeeper(): (job: Searchable, resultById: ResultsById) => Decor {
+  let last: { job: Searchable; resultById: ResultsById; built: Built; decor: Decor } | null = null;
+  return (job, resultById) => {
+    if (last && last.job === job) {
+      if (last.resultById === resultById) return last.decor;
+      const own = new Map<string, string>();
+      for (const [linkId, node] of last.built.fed) {
+        if (last.resultById[linkId]?.status === resultById[linkId]?.status) continue;
+        own.set(node.id, fedLabel(node, linkId, resultById));
+      }
+      if (own.size === 0) {
+        last = { ...last, resultById };
+        return last.decor;
+      }
+      const base = last.decor;
+      const layered = new LayeredLabels(own, base.label);
+      const label = layered.depth > MAX_LAYERS ? flatten(layered, allIds(job)) : layered;
+      const decor: Decor = { unfed: base.unfed, label, changedFrom: { base, ids: new Set(own.keys()) } };
+      last = { job, resultById, built: last.built, decor };
+      return decor;
+    }
+    const built = buildDecor(job, resultById);
+    last = { job, resultById, built, decor: built.decor };
+    return built.decor;
+  };
+}
+
+function* allIds(job: Searchable): Iterable<string> {
+  for (const n of job.nodes) yield n.id;
+  for (const l of job.links) yield l.id;
 }

@@ -130,15 +130,19 @@ function sameText<T>(a: readonly T[], b: readonly T[], same: (x: T, y: T) => boo
 }
 
 let searchable: Searchable | null = null;
+/** The lists last compared with `searchable` (newer than its own when only cables or places changed). */
+let compared: Searchable | null = null;
 /**
  * The job's nodes and links as Find sees them: the same object until an id, kind, name or end
  * changes (or something is added or removed), so a move or an edit of a cable leaves it alone.
+ * Each pair of lists is compared once: every later store update with the same lists returns at once.
  */
 export const selectSearchable: Selector<Searchable> = (s) => {
   const { nodes, links } = s.job;
-  if (searchable && searchable.nodes === nodes && searchable.links === links) return searchable;
+  if (searchable && compared && compared.nodes === nodes && compared.links === links) return searchable;
   if (!searchable || !sameText(searchable.nodes, nodes, sameNodeText) || !sameText(searchable.links, links, sameLinkText)) {
     searchable = { nodes, links };
   }
+  compared = { nodes, links };
   return searchable;
 };

@@ -1,7 +1,7 @@
 // Every field of one link: identity, cable, device, RCD and required time; its results beside.
 
 import { useMemo } from 'react';
-import { linkRole, resolveRules, STANDARD_SIZES, type Link, type Material, type NodeKind } from '../../../../engine/index.js';
+import { roleOfEnds, resolveRules, STANDARD_SIZES, type Link, type Material, type NodeKind } from '../../../../engine/index.js';
 import { selectNode, useEditor } from '../../store/index.js';
 import { editLink } from '../actions.js';
 import { NumberField, Readout, SelectField, TextField } from '../fields/fields.js';
@@ -41,16 +41,10 @@ export function sizeHint(size: number): string | undefined {
 
 const SIZES_ID = 'lwp-sizes-details';
 
-/** The role word of a link; it depends only on the kinds of its two ends (engine linkRole). */
-function useRole(link: Link, fromKind: NodeKind | undefined, toKind: NodeKind | undefined): string {
-  return useMemo(() => {
-    try {
-      return ROLE_LONG[linkRole(useEditor.getState().job, link.id)] ?? '';
-    } catch {
-      return '';
-    }
-    // The role is a function of the link and its end kinds only, so the job need not be a dependency.
-  }, [link, fromKind, toKind]);
+/** The role word of a link, from the kinds of its two ends alone (engine roleOfEnds): nothing
+ *  the size of the job is worked out on an edit. */
+function roleWord(fromKind: NodeKind | undefined, toKind: NodeKind | undefined): string {
+  return ROLE_LONG[roleOfEnds(fromKind, toKind)] ?? '';
 }
 
 // Only this link's record, its rules and the names and kinds of its two ends are subscribed:
@@ -65,7 +59,7 @@ export function LinkDetails({ link }: { link: Link }) {
   const toName = useEditor((s) => selectNode(link.to)(s)?.name);
   const fromKind = useEditor((s) => selectNode(link.from)(s)?.kind);
   const toKind = useEditor((s) => selectNode(link.to)(s)?.kind);
-  const role = useRole(link, fromKind, toKind);
+  const role = roleWord(fromKind, toKind);
   const result = useEditor(selectResult(id));
   // In of the device that protects this link (its own, or the one upstream that protects it).
   const protectingRating = useEditor((s) => {
