@@ -12,7 +12,7 @@ export { LIMITS } from './model/limits.js';
 export { serialiseJob, toFileObject } from './model/serialise.js';
 export { newJob, defaultLinkFor, STANDARD_SIZES } from './model/defaults.js';
 export type { Analysis } from './analysis/analyse.js';
-export { analyse, createAnalysis, reanalyse } from './analysis/analyse.js';
+export { analyse, createAnalysis, reanalyse, rehearseLengthEdit } from './analysis/analyse.js';
 export type { Breakdown, Segment } from './analysis/breakdown.js';
 export { loopBreakdown } from './analysis/breakdown.js';
 export type { ResolvedRules, RuleValue } from './analysis/basis.js';

@@ -4,7 +4,7 @@
 
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { analyse, createAnalysis, loadJob, reanalyse, type Job, type Results } from '../../engine/index.js';
+import { analyse, createAnalysis, loadJob, reanalyse, rehearseLengthEdit, type Job, type Results } from '../../engine/index.js';
 import { jobArb } from './arbitraries.js';
 import type { Obj } from './helpers.js';
 
@@ -96,6 +96,41 @@ describe('reanalyse after one length change', () => {
         close(reanalyse(before, edited).results, analyse(edited), 'results');
       }),
       params,
+    );
+  });
+
+  it('a rehearsal (rehearseLengthEdit) is the real re-analysis of a longer cable, and leaves the analysis it ran from as it was', { timeout: 60_000 }, () => {
+    fc.assert(
+      fc.property(jobArb(), fc.nat(), fc.double({ min: 0, max: 300, noNaN: true }), (file, pick, length) => {
+        const job = load(file);
+        const before = createAnalysis(job);
+        const rehearsed = rehearseLengthEdit(before);
+        const l = job.links.findIndex((x) => x.cable.length > 0);
+        if (l < 0) {
+          expect(rehearsed).toBeNull();
+          return;
+        }
+        expect(rehearsed).not.toBeNull();
+        // Exactly one link is half as long again in what was rehearsed: find it by its results.
+        const changed = job.links.filter((x) => {
+          const copy: Job = { ...job, links: job.links.map((y) => (y === x ? { ...x, cable: { ...x.cable, length: x.cable.length * 1.5 } } : y)) };
+          try {
+            close(stripNotes(rehearsed!), stripNotes(analyse(copy)), 'rehearsed');
+            return true;
+          } catch {
+            return false;
+          }
+        });
+        expect(changed.length).toBeGreaterThan(0);
+        // The analysis it ran from is untouched, and a real edit from it is exact.
+        close(before.results, analyse(job), 'before');
+        if (job.links.length === 0) return;
+        const i = pick % job.links.length;
+        const link = job.links[i]!;
+        const edited: Job = { ...job, links: job.links.map((x, k) => (k === i ? { ...link, cable: { ...link.cable, length } } : x)) };
+        close(stripNotes(reanalyse(before, edited).results), stripNotes(analyse(edited)), 'after the rehearsal');
+      }),
+      { numRuns: 30 },
     );
   });
 });

@@ -3,6 +3,7 @@ import {
   createAnalysis,
   formatProblem,
   reanalyse,
+  rehearseLengthEdit,
   type Analysis,
   loadJob as readJob,
   toFileObject,
@@ -175,4 +176,19 @@ export function derive(job: Job, previous: Record<string, CircuitResult>): Deriv
     return kept;
   });
   return { results: { ...results, circuits }, resultById, error: null };
+}
+
+/**
+ * The analysis half of a length edit rehearsed once on the job as it is (engine
+ * rehearseLengthEdit), with the comparison derive makes against the results shown; nothing is
+ * kept and no state changes. The editor runs it when the browser is idle after a job opens.
+ */
+export function rehearseDerive(job: Job, shown: Record<string, CircuitResult>): void {
+  if (!lastAnalysis || lastAnalysis.job !== job) return;
+  const results = rehearseLengthEdit(lastAnalysis);
+  if (!results) return;
+  for (const c of results.circuits) {
+    const old = shown[c.link];
+    if (old && old !== c) sameResult(old, c);
+  }
 }

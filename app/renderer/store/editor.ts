@@ -3,7 +3,7 @@
 // is validated by the engine and becomes one undo step.
 import { create } from 'zustand';
 import { newJob, type CircuitResult, type Job, type Results } from '../../../engine/index.js';
-import { derive } from './derive.js';
+import { derive, rehearseDerive } from './derive.js';
 import { idFollower } from './renames.js';
 import { firstError, describe } from './derive.js';
 import { applyEdit, EditError, onlyMoves, touchedIds, type ApplyOutcome, type Edit } from './edits.js';
@@ -98,11 +98,41 @@ function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; rea
   return { ok: true, next };
 }
 
+/** Runs fn when the browser is next idle (soon anyway), or on the next turn where it cannot tell. */
+function whenIdle(fn: () => void): void {
+  if (typeof window !== 'undefined' && typeof window.requestIdleCallback === 'function') window.requestIdleCallback(fn, { timeout: 2000 });
+  else setTimeout(fn, 0);
+}
+
 const initialJob = newJob();
 savedJob = initialJob;
 const initial = derive(initialJob, {});
 
 export const useEditor = create<EditorState>()((set, get) => {
+  /**
+   * Once the browser is idle after a job opens, a length edit is rehearsed on a copy: the checks
+   * (trial), the follow-up of ids and the re-analysis with its comparison (rehearseDerive) run
+   * and are thrown away, so the user's first edit of a large job does not wait while that code
+   * is compiled. Nothing in the store changes, and a job replaced meanwhile is left alone.
+   */
+  function rehearseSoon(job: Job) {
+    whenIdle(() => {
+      const s = get();
+      if (s.job !== job) return;
+      try {
+        const link = job.links.find((l) => l.cable.length > 0);
+        if (link) {
+          const tried = trial(job, { op: 'update-link', id: link.id, patch: { cable: { ...link.cable, length: link.cable.length * 1.5 } } });
+          if (tried.ok) existing(idFollower(job, tried.next), s.selection);
+        }
+        rehearseDerive(job, s.resultById);
+      } catch {
+        // A rehearsal changes nothing, so one that fails has nothing to undo: the real edit
+        // runs the same code and reports whatever went wrong there.
+      }
+    });
+  }
+
   /** Moves the store to a new document state, recomputing what depends on it. */
   function become(job: Job, reanalyse: boolean, extra: Partial<EditorState> = {}) {
     const s = get();
@@ -212,6 +242,7 @@ export const useEditor = create<EditorState>()((set, get) => {
         message: null,
         documentSeq: get().documentSeq + 1,
       });
+      rehearseSoon(job);
       // A job written by another tool may have no drawing positions: lay those nodes out
       // (not an edit of the user's: no undo step, and a job that was clean stays clean).
       if (job.nodes.some((n) => n.at === undefined)) {
