@@ -134,5 +134,10 @@ describe('the feed choice’s list of parts', () => {
     const next = selectParts({ job: { nodes: renamed } });
     expect(next).not.toBe(first);
     expect(next[1]).toBe('board\u0000DB1\u0000Board two');
+    // One record moved among the rest (a drag frame): the same array; a node added: a new one.
+    const oneMoved = renamed.map((n) => (n.id === 'S1' ? { ...n, at: { x: 9, y: 9 } } : n)) as JobNode[];
+    expect(selectParts({ job: { nodes: oneMoved } })).toBe(next);
+    const added = [...oneMoved, { id: 'P7', kind: 'point', at: { x: 0, y: 0 } }] as unknown as JobNode[];
+    expect(selectParts({ job: { nodes: added } })).toEqual([...next, 'point\u0000P7\u0000']);
   });
 });

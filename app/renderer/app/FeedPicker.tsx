@@ -52,24 +52,33 @@ function partNodes(parts: readonly string[]): Array<{ id: string; kind: 'supply'
 
 /**
  * The parts' kinds, ids and names, as one text each; the same array while the nodes list is the
- * same, and while an edit (a drag) left every part's kind, id and name as they were. No store
- * update compares thousands of entries through a shallow equality that builds two maps.
+ * same, and while an edit (a drag) left every part's kind, id and name as they were. Only the
+ * records that are new since the last call are read (a drag frame: the moved nodes), so no store
+ * update builds or compares a text for every part.
  */
 let partsOf: readonly JobNode[] | null = null;
 let partsKept: readonly string[] = [];
+const partText = (n: JobNode): string => `${n.kind}\u0000${n.id}\u0000${n.name ?? ''}`;
 export function selectParts(s: { job: { nodes: readonly JobNode[] } }): readonly string[] {
   const nodes = s.job.nodes;
   if (nodes === partsOf) return partsKept;
+  const before = partsOf;
   partsOf = nodes;
-  let same = nodes.length === partsKept.length;
-  const next: string[] = new Array<string>(nodes.length);
+  if (!before || before.length !== nodes.length || partsKept.length !== nodes.length) {
+    const next = nodes.map(partText);
+    if (next.length !== partsKept.length || next.some((p, i) => p !== partsKept[i])) partsKept = next;
+    return partsKept;
+  }
+  let next: string[] | null = null;
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i]!;
-    const p = `${n.kind}\u0000${n.id}\u0000${n.name ?? ''}`;
+    if (n === before[i]) continue;
+    const p = partText(n);
+    if (p === partsKept[i]) continue;
+    next ??= partsKept.slice();
     next[i] = p;
-    if (same && partsKept[i] !== p) same = false;
   }
-  if (!same) partsKept = next;
+  if (next) partsKept = next;
   return partsKept;
 }
 

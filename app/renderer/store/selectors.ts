@@ -13,16 +13,29 @@ function cached<T>(cache: Map<string, Selector<T>>, id: string, make: () => Sele
   return sel;
 }
 
-// Index by id, rebuilt only when the array itself changes (once per edit, not per component).
+// Index by id, brought up to date only when the array itself changes (once per edit, not per
+// component): a list of the same length and ids (a drag frame, a cable edit) has only its new
+// records put in, anything else (an element added, removed or renamed) is indexed afresh.
 function indexer<T extends { id: string }>(pick: (s: EditorState) => T[]) {
   let source: T[] | null = null;
   let index = new Map<string, T>();
   return (s: EditorState): Map<string, T> => {
     const list = pick(s);
-    if (list !== source) {
-      source = list;
-      index = new Map(list.map((item) => [item.id, item]));
+    if (list === source) return index;
+    const before = source;
+    source = list;
+    if (before && before.length === list.length) {
+      let same = true;
+      for (let i = 0; i < list.length && same; i++) {
+        const item = list[i]!;
+        const was = before[i]!;
+        if (item === was) continue;
+        if (item.id === was.id) index.set(item.id, item);
+        else same = false;
+      }
+      if (same) return index;
     }
+    index = new Map(list.map((item) => [item.id, item]));
     return index;
   };
 }
