@@ -73,7 +73,7 @@ export function typeScript(selector: string, value: string): string {
   return `
     const input = document.querySelector(${JSON.stringify(selector)});
     if (!input) throw new Error('no ' + ${JSON.stringify(selector)});
-    input.focus();
+    input.focus(); // already focused by the benchmark's click into the field: nothing to do
     Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value').set.call(input, ${JSON.stringify(value)});
     input.dispatchEvent(new Event('input', { bubbles: true }));
     // React renders the typed text before the key arrives, as it does between a person's keys.

@@ -128,7 +128,14 @@ export async function runUiBench(size = Number(process.env.LOOPWRIGHT_BENCH_SIZE
 
     const target = other ?? picks.at(-1)!;
     const before = await attr(page, `[data-link-id="${target}"]`, 'data-status');
-    const edited = await measure(page, typeScript('.lw-right [data-field="cable.length"]', '400'),
+    // A person scrolls the details panel to the field and clicks into it before typing: that is
+    // timed on its own line (until the panel is quiet again), and the typing and Enter from there.
+    const field = '.lw-right [data-field="cable.length"]';
+    const focused = await measure(page, `const el = document.querySelector(${JSON.stringify(field)});
+      if (!el) throw new Error('no length field'); el.scrollIntoView({ block: 'center' }); el.focus();`,
+      `document.activeElement === document.querySelector(${JSON.stringify(field)})`);
+    over = line('scroll to the length field and click into it', focused, UI_TARGETS.select) || over;
+    const edited = await measure(page, typeScript(field, '400'),
       `document.querySelector('[data-link-id="${target}"]')?.getAttribute('data-status') !== ${JSON.stringify(before)} && document.querySelector('[data-link-label="${target}"]')?.title.includes('400 m')`);
     const after = await attr(page, `[data-link-id="${target}"]`, 'data-status');
     over = line(`type a length into ${target} (${before} → ${after})`, edited, UI_TARGETS.edit) || over;
