@@ -18,13 +18,13 @@ import { correctedReading, correctionFactor, readingTemperature, testLimit } fro
 import { phaseTable, asPhases, type PhaseTable } from './phases.js';
 import type { CheckCounts, CircuitResult, CheckStatus, Results, Status, StatusCounts, SupplyResult, Summary } from './results.js';
 import { Sums } from './sums.js';
-import { atMost, fixedOrRange } from './tolerance.js';
+import { atMost, fixedOrRange, toFixed } from './tolerance.js';
 import { dropTable, dropTableWithLink, voltageDropLimit, type DropTable } from './voltage-drop.js';
 import { checkWithstand } from './withstand.js';
 import { worstPathOf } from './worst-path.js';
 import { Version } from './versions.js';
 
-const kA = (a: number): string => `${(a / 1000).toFixed(2)} kA`;
+const kA = (a: number): string => `${toFixed(a / 1000, 2)} kA`;
 const orNull = (v: number): number | null => (Number.isNaN(v) ? null : v);
 
 /** A finished analysis: the results and what produced them, for a quick re-analysis after an edit. */

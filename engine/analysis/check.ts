@@ -17,9 +17,9 @@ import { requiredTime } from './required-time.js';
 import type { CircuitResult, Status } from './results.js';
 import type { Sums } from './sums.js';
 import type { TreeOrder } from './order.js';
-import { atMost, fixedOrRange } from './tolerance.js';
+import { atMost, fixedOrRange, toFixed } from './tolerance.js';
 
-const pct = (v: number): string => `${(v * 100).toFixed(0)} %`;
+const pct = (v: number): string => `${toFixed(v * 100, 0)} %`;
 const ohms = (v: number): string => fixedOrRange(v, 3, ' Ω');
 
 /** What the loop check leaves for the later checks and the fixes of one link. */
@@ -256,7 +256,8 @@ export function checkLoopInto(sums: Sums, l: number, result: CircuitResult, tabl
       // A breaker or stated trip current clears in 0.1 s when If ≥ Ia: the same comparison as the
       // ratio's, taken from it so that rounding (in the smallest numbers) cannot make them disagree.
       if (!zeroLoop && device.type !== 'curve') result.clearingTime = status === 'pass' ? INSTANTANEOUS_TIME : null;
-      if (status === 'fail') notes.push(`Zs ${ohms(result.zs!)} exceeds the limit ${ohms(budget)}: the fault current ${fixedOrRange(result.faultCurrent, 0, ' A')} is below the ${fixedOrRange(ia, 0, ' A')} needed to disconnect within ${tReq} s`);
+      // Joined into one flat string: a template would keep ten pieces per failing circuit.
+      if (status === 'fail') notes.push(['Zs ', ohms(result.zs!), ' exceeds the limit ', ohms(budget), ': the fault current ', fixedOrRange(result.faultCurrent, 0, ' A'), ' is below the ', fixedOrRange(ia, 0, ' A'), ' needed to disconnect within ', String(tReq), ' s'].join(''));
       if (!zeroLoop && result.clearingTime === null && device.type === 'curve') {
         status = 'fail';
         notes.push(`the fault current is below the lowest current of the device's time–current curve; its clearing time is unknown`);
@@ -286,7 +287,7 @@ export function checkLoopInto(sums: Sums, l: number, result: CircuitResult, tabl
   const protectingLink = order.links[protecting]!;
   if (status === 'fail' && protectingLink.rcd) {
     status = 'rcd';
-    notes.push(`disconnection relies on the ${(protectingLink.rcd.sensitivity * 1000).toFixed(0)} mA RCD of ${protectingLink.id}`);
+    notes.push(`disconnection relies on the ${toFixed(protectingLink.rcd.sensitivity * 1000, 0)} mA RCD of ${protectingLink.id}`);
   }
   if (protecting !== l) notes.push(`protected by the device of ${protectingLink.id}`);
   result.status = status;
