@@ -79,9 +79,14 @@ export function createAnalysis(job: Job): Analysis {
   });
   const state: State = { rules, sums, phases, loads, drops, faults, facts, circuits: new Array<CircuitResult>(nl), headroom, ratios, version, phasors: [], fixInputs: undefined };
   for (let l = 0; l < job.links.length; l++) checkOne(state, l);
-  // Fixes need the protecting link's design current, known only now.
-  for (let l = 0; l < job.links.length; l++) finishOne(state, l);
-  return { job, results: resultsOf(state), state };
+  // Fixes need the protecting link's design current, known only now. Each circuit is counted
+  // into the summary as it is finished (one walk over the results, not two).
+  const summary = emptySummary();
+  for (let l = 0; l < job.links.length; l++) {
+    finishOne(state, l);
+    count(summary, state.circuits[l]!, 1);
+  }
+  return { job, results: resultsOf(state, summary), state };
 }
 
 /**
@@ -432,14 +437,18 @@ function verdictOf(c: CircuitResult): Status {
   return c.status === 'pass' ? 'pass' : 'unchecked';
 }
 
-function summarise(circuits: readonly CircuitResult[]): Summary {
+function emptySummary(): Summary {
   const counts = () => ({ pass: 0, fail: 0, rcd: 0, unchecked: 0 });
   const checkCounts = () => ({ pass: 0, fail: 0, unchecked: 0 });
-  const summary: Summary = {
+  return {
     ...counts(),
     verdict: counts(),
     checks: { voltage: checkCounts(), capacity: checkCounts(), breaking: checkCounts(), withstand: checkCounts(), measured: counts() },
   };
+}
+
+function summarise(circuits: readonly CircuitResult[]): Summary {
+  const summary = emptySummary();
   for (let i = 0; i < circuits.length; i++) count(summary, circuits[i]!, 1);
   return summary;
 }
