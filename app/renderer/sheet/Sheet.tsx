@@ -1,6 +1,6 @@
 // The sheet: React Flow drawing the job. Nodes and links come from the store; every change the
 // user makes on the sheet goes back through the store's apply(), so it is validated and undoable.
-import { useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState, type DragEvent, type FocusEvent as ReactFocusEvent, type MouseEvent as ReactMouseEvent } from 'react';
 import {
   Background, BackgroundVariant, ConnectionLineType, MiniMap, ReactFlow, getViewportForBounds, useReactFlow, useStore,
   type Connection, type Edge, type EdgeChange, type Node, type NodeChange,
@@ -79,7 +79,8 @@ export function clearPartViewNote(): void {
  * Zoom out, the zoom level, zoom in and Fit, in a bar under the drawing rather than over it, so
  * they never cover a label; and the overview map shown or hidden.
  */
-function ZoomBar({ map, onMap, placed }: { map: boolean; onMap(v: boolean): void; placed: boolean }) {
+// Memoised: the sheet renders on every drag frame, the zoom bar only when the zoom or its props change.
+const ZoomBar = memo(function ZoomBar({ map, onMap, placed }: { map: boolean; onMap(v: boolean): void; placed: boolean }) {
   const flow = useReactFlow();
   const zoom = useStore((st) => st.transform[2]);
   return (
@@ -92,7 +93,7 @@ function ZoomBar({ map, onMap, placed }: { map: boolean; onMap(v: boolean): void
       {map && !placed && <span className="lw-muted" data-map-note>(left out here: every corner of the sheet has part of the drawing)</span>}
     </div>
   );
-}
+});
 
 export interface SheetProps {
   onContextMenu(at: { x: number; y: number }): void;

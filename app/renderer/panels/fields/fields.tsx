@@ -97,11 +97,16 @@ function Shell(props: { label: string; compact?: boolean; inputId: string; unit?
 function useTextCommit(shown: string, commit: (text: string) => Outcome) {
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
-  // A change from elsewhere (undo, another panel) replaces the text and any stale message.
-  useEffect(() => {
+  // A change from elsewhere (undo, another panel, a drag moving the node) replaces the text and
+  // any stale message. Adopted while rendering (React renders again at once, before committing),
+  // not in an effect: an effect would commit the field twice for every change, and a drag
+  // changes the position fields on every frame.
+  const [adopted, setAdopted] = useState(shown);
+  if (adopted !== shown) {
+    setAdopted(shown);
     setText(shown);
     setError(null);
-  }, [shown]);
+  }
   const run = () => {
     // The value as it stands is a valid one: a refusal of an earlier try goes.
     if (text === shown) {
