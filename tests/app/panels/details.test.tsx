@@ -1,4 +1,5 @@
 import { act, fireEvent, render, screen, within } from '@testing-library/react';
+import { Profiler } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { STANDARD_SIZES } from '../../../engine/index.js';
 import { DetailsPanel } from '../../../app/renderer/panels/index.js';
@@ -248,6 +249,31 @@ describe('curve points editor', () => {
     expect(container.querySelectorAll('[data-curve-row]').length).toBe(2);
     const buttons = container.querySelectorAll<HTMLButtonElement>('[data-action="remove-point"]');
     expect([...buttons].every((b) => b.disabled)).toBe(true);
+  });
+});
+
+describe('a node moved while its details are shown (a drag)', () => {
+  beforeEach(() => load(sampleJob()));
+
+  it('shows each new position in one commit of the panel, and keeps the other fields untouched', () => {
+    let commits = 0;
+    const { container } = render(
+      <Profiler id="details" onRender={() => void commits++}>
+        <DetailsPanel />
+      </Profiler>,
+    );
+    act(() => useEditor.getState().select({ nodes: ['P2'], links: [] }));
+    const x = field(container, 'at.x');
+    const name = field(container, 'name');
+    commits = 0;
+    for (let step = 1; step <= 5; step++) {
+      act(() => void useEditor.getState().apply({ op: 'move', moves: [{ id: 'P2', at: { x: step * 10, y: 320 } }] }));
+      expect(field(container, 'at.x').value).toBe(String(step * 10));
+    }
+    // One commit a move: the field takes the new value while rendering, not in a second pass.
+    expect(commits).toBe(5);
+    expect(field(container, 'at.x')).toBe(x);
+    expect(name.value).toBe('Shed');
   });
 });
 
