@@ -64,7 +64,7 @@ export function selectParts(s: { job: { nodes: readonly JobNode[] } }): readonly
   if (nodes === partsOf) return partsKept;
   const before = partsOf;
   partsOf = nodes;
-  if (!before || before.length !== nodes.length || partsKept.length !== nodes.length) {
+  if (!before || before.length !== nodes.length) {
     const next = nodes.map(partText);
     if (next.length !== partsKept.length || next.some((p, i) => p !== partsKept[i])) partsKept = next;
     return partsKept;

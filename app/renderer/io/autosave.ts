@@ -2,6 +2,7 @@
 // crash the app offers to restore it. A job with no unsaved changes leaves nothing behind.
 import { parseJob, serialiseJob, type Job } from '../../../engine/index.js';
 import { useEditor } from '../store/editor.js';
+import { whenIdle } from '../store/idle.js';
 import { liveTabs, tabId } from './session.js';
 
 /** Every tab autosaves under a key of its own (this prefix and its id), so two tabs never overwrite each other. */
@@ -39,16 +40,6 @@ export function isQuotaError(e: unknown): boolean {
 function size(text: string): string {
   const kb = (text.length * 2) / 1024;
   return kb >= 1024 ? `${(kb / 1024).toFixed(1)} MB` : `${Math.ceil(kb)} kB`;
-}
-
-/** Runs `fn` when the browser is idle (requestIdleCallback), else on the next turn. */
-function whenIdle(fn: () => void): { cancel(): void } {
-  if (typeof window !== 'undefined' && typeof window.requestIdleCallback === 'function') {
-    const handle = window.requestIdleCallback(fn, { timeout: AUTOSAVE_IDLE_TIMEOUT_MS });
-    return { cancel: () => window.cancelIdleCallback(handle) };
-  }
-  const handle = setTimeout(fn, 0);
-  return { cancel: () => clearTimeout(handle) };
 }
 
 function cancelPending(): boolean {
@@ -104,7 +95,7 @@ export function startAutosave(): () => void {
       idle = whenIdle(() => {
         idle = null;
         write();
-      });
+      }, AUTOSAVE_IDLE_TIMEOUT_MS);
     }, AUTOSAVE_DELAY_MS);
   });
   const flush = () => {

@@ -4,6 +4,7 @@
 import { create } from 'zustand';
 import { newJob, type CircuitResult, type Job, type Results } from '../../../engine/index.js';
 import { derive, rehearseDerive } from './derive.js';
+import { whenIdle } from './idle.js';
 import { idFollower } from './renames.js';
 import { firstError, describe } from './derive.js';
 import { applyEdit, EditError, onlyMoves, touchedIds, type ApplyOutcome, type Edit } from './edits.js';
@@ -98,11 +99,8 @@ function trial(job: Job, edit: Edit): { ok: true; next: Job } | { ok: false; rea
   return { ok: true, next };
 }
 
-/** Runs fn when the browser is next idle (soon anyway), or on the next turn where it cannot tell. */
-function whenIdle(fn: () => void): void {
-  if (typeof window !== 'undefined' && typeof window.requestIdleCallback === 'function') window.requestIdleCallback(fn, { timeout: 2000 });
-  else setTimeout(fn, 0);
-}
+/** At the latest this long after a job opens, its rehearsed edit runs even if the browser is busy. */
+const REHEARSAL_TIMEOUT_MS = 2000;
 
 const initialJob = newJob();
 savedJob = initialJob;
@@ -130,7 +128,7 @@ export const useEditor = create<EditorState>()((set, get) => {
         // A rehearsal changes nothing, so one that fails has nothing to undo: the real edit
         // runs the same code and reports whatever went wrong there.
       }
-    });
+    }, REHEARSAL_TIMEOUT_MS);
   }
 
   /** Moves the store to a new document state, recomputing what depends on it. */
