@@ -76,12 +76,14 @@ const mutation: fc.Arbitrary<Mutation> = fc.oneof(
     else delete at.parent[at.key];
     return root;
   }),
-  // put a value of the wrong type, a weird number or text anywhere (the root included)
+  // put a value of the wrong type, a weird number or text anywhere (the root included). A copy:
+  // fc.constantFrom hands out the same object each time, and a later mutation could otherwise
+  // change it for every job after, or set one of its keys to itself (a cycle no file can hold).
   wrongType.map<Mutation>((value) => (root, pick) => {
     const all = paths(root);
     const at = parentOf(root, all[pick % all.length]!);
-    if (at === null) return value;
-    at.parent[at.key] = value;
+    if (at === null) return structuredClone(value);
+    at.parent[at.key] = structuredClone(value);
     return root;
   }),
   // nest a value deep: up to well past the depth limit
