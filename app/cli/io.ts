@@ -6,7 +6,9 @@
 //   can carry control characters and escape sequences.
 // - Outputs (the printout's PDF and SVG sheets) are written with writeFileSafely
 //   (app/main/safe-files.ts, Node only): flushed, renamed over, folder flushed, a read-only file
-//   refused, a symbolic link written through, leftovers of a crash removed.
+//   refused, a symbolic link written through, leftovers of a crash removed. A PDF written over
+//   an earlier one keeps it beside the new one as NAME.pdf.bak (it may be the copy filed with
+//   the job); the SVG sheets, one file per sheet in a folder, keep no backups.
 
 import { closeSync, fstatSync, openSync, readSync } from 'node:fs';
 import { formatProblem, LIMITS, parseJob, terminalText, type LoadResult, type Problem } from '../../engine/index.js';
@@ -103,9 +105,10 @@ function forTerminal(p: Problem): Problem {
   return { ...p, where: terminalText(p.where), field: terminalText(p.field), message: terminalText(p.message) };
 }
 
-/** Write an output file (never a job file) with the care of writeFileSafely; throws a plain error. */
-export async function writeOutputFile(path: string, data: string | Uint8Array): Promise<void> {
-  await writeFileSafely(path, data);
+/** Write an output file (never a job file) with the care of writeFileSafely, keeping the
+ *  previous version as NAME.bak when `backup` is set; throws a plain error. */
+export async function writeOutputFile(path: string, data: string | Uint8Array, options: { backup?: boolean } = {}): Promise<void> {
+  await writeFileSafely(path, data, options);
 }
 
 /** Several outputs with the same care, each folder flushed once (writeFilesSafely). */

@@ -18,7 +18,8 @@ import { CHANNELS, type PaperChoice, type SavedJob } from '../shared/ipc.js';
 import type { AppContext } from './context.js';
 import { handle, must } from './ipc.js';
 import { checkPrintArgs } from './ipc-validate.js';
-import { problemLines, reason, writeFileAtomic } from './job-files.js';
+import { problemLines, reason } from './job-files.js';
+import { writeFileSafely } from './safe-files.js';
 import { FONT_FILES, PRINT_CSS_FILE, printCss, printHtml, printPageSize } from './print-page.js';
 import { webPreferencesFor, type JobWindow } from './window.js';
 
@@ -83,7 +84,7 @@ async function exportPdf(jw: JobWindow, text: string, paper: PaperChoice | undef
   const target = /\.pdf$/i.test(choice.filePath) ? choice.filePath : `${choice.filePath}.pdf`;
   try {
     const bytes = await jobToPdf(job, { ...reportOptions(paper), fonts: await reportFonts() });
-    await writeFileAtomic(target, bytes);
+    await writeFileSafely(target, bytes, { backup: true });
   } catch (error) {
     await refuse(jw, 'The PDF was not written.', `${target}: ${reason(error)}`);
     return null;

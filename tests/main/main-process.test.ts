@@ -201,6 +201,10 @@ describe('printout', () => {
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     // A4 landscape is 842 × 595 pt (ISO 216: 297 × 210 mm).
     expect(bytes.toString('latin1')).toMatch(/\/MediaBox \[0 0 841\.8[0-9]* 595\.2[0-9]*\]/);
+    // Exported again over it: the earlier printout is kept beside it.
+    dialog.saveAnswers.push({ canceled: false, filePath: `${target}.pdf` });
+    expect(await invoke('loopwright:export-pdf', win, demoText, { size: 'A4', orientation: 'landscape' })).toEqual(saved);
+    expect(await fs.readFile(`${target}.pdf.bak`)).toEqual(bytes);
   });
 
   it('Export PDF of a job with problems says so and writes nothing', async () => {

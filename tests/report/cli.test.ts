@@ -1,6 +1,6 @@
 // The report command and check --csv, run as real processes.
 
-import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, lstatSync, mkdtempSync, readFileSync, readdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -54,6 +54,35 @@ describe('report command', () => {
     r = cli('report', bad, '-o', existing);
     expect(r.status).toBe(2);
     expect(readFileSync(existing, 'utf8')).toBe('keep me');
+  });
+
+  it('writing over a PDF keeps the earlier one as .bak, refuses a read-only one and writes through a link', () => {
+    const out = join(dir, 'filed.pdf');
+    writeFileSync(out, 'the printout filed last month');
+    let r = cli('report', demo, '-o', out);
+    expect(r.status).toBe(1);
+    expect(readFileSync(out).subarray(0, 5).toString()).toBe('%PDF-');
+    expect(readFileSync(`${out}.bak`, 'utf8')).toBe('the printout filed last month');
+    expect(readdirSync(dir).filter((f) => f.endsWith('.tmp'))).toEqual([]);
+
+    const locked = join(dir, 'locked.pdf');
+    writeFileSync(locked, 'signed off');
+    chmodSync(locked, 0o444);
+    r = cli('report', demo, '-o', locked);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/locked\.pdf is read-only/);
+    expect(readFileSync(locked, 'utf8')).toBe('signed off');
+    expect(existsSync(`${locked}.bak`)).toBe(false);
+
+    const real = join(dir, 'real.pdf');
+    writeFileSync(real, 'old');
+    const link = join(dir, 'latest.pdf');
+    symlinkSync('real.pdf', link);
+    r = cli('report', demo, '-o', link);
+    expect(r.status).toBe(1);
+    expect(lstatSync(link).isSymbolicLink()).toBe(true);
+    expect(readFileSync(real).subarray(0, 5).toString()).toBe('%PDF-');
+    expect(readFileSync(`${real}.bak`, 'utf8')).toBe('old');
   });
 
   it('-o missing, or the output being the job file: exit 2, nothing written', () => {

@@ -37,9 +37,10 @@ function samePath(a: string, b: string): boolean {
 }
 
 /** Never a half-written file: temporary file flushed and renamed, folder flushed, read-only
- *  files refused, links written through (writeOutputFile in io.ts). */
-async function writeAtomically(path: string, data: string | Uint8Array): Promise<void> {
-  await writeOutputFile(path, data);
+ *  files refused, links written through, an earlier PDF kept as NAME.bak (writeOutputFile in
+ *  io.ts). */
+async function writePdf(path: string, data: Uint8Array): Promise<void> {
+  await writeOutputFile(path, data, { backup: true });
 }
 
 function why(error: unknown): string {
@@ -66,6 +67,9 @@ export const report: Command = {
     'and the caution. Run the command twice for both documents.',
     '',
     'Nothing is written when the job cannot be read; an existing OUT file is then left as it was.',
+    'A PDF is written whole or not at all (a temporary file flushed to the disk, then renamed',
+    'over OUT); an earlier OUT is kept beside it as OUT.bak, a read-only OUT is refused and a',
+    'symbolic link is written through to its target.',
     'The output may not be the job file itself, nor any .lwj file.',
     '',
     'Exit status, as for check: 0 the printout was written and no verdict fails or relies on an',
@@ -116,7 +120,7 @@ export const report: Command = {
     }
     try {
       if (existsSync(output) && statSync(output).isDirectory()) throw new Error(`${output} is a directory`);
-      await writeAtomically(output, pdf);
+      await writePdf(output, pdf);
     } catch (error) {
       err(`report: could not write ${output}: ${why(error)}\n`);
       return EXIT.unusable;
