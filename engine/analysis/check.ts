@@ -12,6 +12,7 @@ import type { Device, Link } from '../model/types.js';
 import { sizeNotes } from '../model/sizes.js';
 import { abs, type Complex } from './complex.js';
 import { clearingTime, deviceMark, INSTANTANEOUS_TIME, tripAmps, tripCurrent } from './devices.js';
+import { NO_FIXES } from './fixes.js';
 import { maxLengthOf } from './max-length.js';
 import { requiredTime } from './required-time.js';
 import type { CircuitResult, Status } from './results.js';
@@ -146,7 +147,7 @@ class CircuitRecord implements CircuitResult {
   withstandStatus: CircuitResult['withstandStatus'] = 'unchecked';
   testLimit: number | null = null;
   measured: CircuitResult['measured'] = null;
-  fixes: CircuitResult['fixes'] = [];
+  fixes: CircuitResult['fixes'] = NO_FIXES;
   verdict: CircuitResult['verdict'] = 'unchecked';
 
   constructor(link: Link, role: CircuitResult['role']) {

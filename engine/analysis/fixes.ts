@@ -19,6 +19,28 @@ const CURVE_ORDER: readonly Curve[] = ['B', 'C', 'D'];
 export const RCD_FIX_SENSITIVITY = 0.03;
 
 /**
+ * The fixes a link with none has, and the size, device and RCD fixes, each made once and shared
+ * by every link it fixes (frozen: results are read, never changed). A job whose circuits mostly
+ * fail asks for tens of thousands of fixes; only a length fix is the link's own.
+ */
+export const NO_FIXES: Fix[] = Object.freeze([]) as unknown as Fix[];
+const RCD_FIX: Fix = Object.freeze({ kind: 'rcd', sensitivity: RCD_FIX_SENSITIVITY });
+const SIZE_FIXES: Array<Fix | undefined> = [];
+const DEVICE_FIXES: Array<Fix | undefined> = [];
+
+/** The size fix to STANDARD_SIZES[i] active and STANDARD_SIZES[k] earth. */
+function sizeFix(i: number, k: number): Fix {
+  const at = i * STANDARD_SIZES.length + k;
+  return (SIZE_FIXES[at] ??= Object.freeze({ kind: 'size', active: STANDARD_SIZES[i]!, earth: STANDARD_SIZES[k]! }));
+}
+
+/** The device fix to curve CURVE_ORDER[c] at FIX_RATINGS[r]. */
+function deviceFix(c: number, r: number): Fix {
+  const at = c * FIX_RATINGS.length + r;
+  return (DEVICE_FIXES[at] ??= Object.freeze({ kind: 'device', curve: CURVE_ORDER[c]!, rating: FIX_RATINGS[r]! }));
+}
+
+/**
  * What the fixes of one link read. The analysis keeps one of these and fills it for each
  * failing link (a job whose circuits mostly fail asks for thousands of fixes, and an object per
  * link, kept or not, costs the collector's time): the loop facts are the loop table's numbers.
@@ -81,20 +103,21 @@ export function findFixes(x: FixInputs): Fix[] {
   const { link, result } = x;
   const loopFails = result.status === 'fail' || result.status === 'rcd';
   const dropFails = result.voltageStatus === 'fail';
-  if (!loopFails && !dropFails) return [];
+  if (!loopFails && !dropFails) return NO_FIXES;
   const cable = link.cable;
   const length: Fix | null =
     loopFails && result.maxLength !== null && result.maxLength > 0 && result.maxLength < cable.length ? { kind: 'length', maxLength: result.maxLength } : null;
   const size = findSize(x);
   const device = x.protecting?.device;
-  const deviceFix = loopFails && device?.type === 'mcb' && !Number.isNaN(x.budget) && result.own !== null ? findDevice(x, device.curve, device.rating) : null;
-  const rcd: Fix | null = loopFails && result.status === 'fail' && x.protecting && !x.protecting.rcd ? { kind: 'rcd', sensitivity: RCD_FIX_SENSITIVITY } : null;
-  const n = (length ? 1 : 0) + (size ? 1 : 0) + (deviceFix ? 1 : 0) + (rcd ? 1 : 0);
+  const devicePick = loopFails && device?.type === 'mcb' && !Number.isNaN(x.budget) && result.own !== null ? findDevice(x, device.curve, device.rating) : null;
+  const rcd: Fix | null = loopFails && result.status === 'fail' && x.protecting && !x.protecting.rcd ? RCD_FIX : null;
+  const n = (length ? 1 : 0) + (size ? 1 : 0) + (devicePick ? 1 : 0) + (rcd ? 1 : 0);
+  if (n === 0) return NO_FIXES;
   const fixes: Fix[] = new Array<Fix>(n);
   let k = 0;
   if (length) fixes[k++] = length;
   if (size) fixes[k++] = size;
-  if (deviceFix) fixes[k++] = deviceFix;
+  if (devicePick) fixes[k++] = devicePick;
   if (rcd) fixes[k++] = rcd;
   return fixes;
 }
@@ -132,12 +155,12 @@ function findSize(x: FixInputs): Fix | null {
     let last = first - 1;
     while (last + 1 < STANDARD_SIZES.length && STANDARD_SIZES[last + 1]! <= top) last++;
     if (last < first) continue;
-    if (!loopApplies) return { kind: 'size', active: a, earth: STANDARD_SIZES[first]! };
+    if (!loopApplies) return sizeFix(i, first);
     // A larger earth only lowers the loop: when the largest allowed fails, every one does.
     if (!candidatePasses(x, (rhoActive / a + rhoEarth / STANDARD_SIZES[last]!) / n, imPerMetre)) continue;
     for (let k = first; k <= last; k++) {
       const e = STANDARD_SIZES[k]!;
-      if (candidatePasses(x, (rhoActive / a + rhoEarth / e) / n, imPerMetre)) return { kind: 'size', active: a, earth: e };
+      if (candidatePasses(x, (rhoActive / a + rhoEarth / e) / n, imPerMetre)) return sizeFix(i, k);
     }
   }
   return null;
@@ -148,13 +171,13 @@ function findDevice(x: FixInputs, curve: Curve, rating: number): Fix | null {
   const c = rules.voltageFactor.value;
   const u0 = rules.voltage.value;
   const s = rules.unknownSourceShare.value;
-  const curves = CURVE_ORDER.slice(0, CURVE_ORDER.indexOf(curve) + 1);
+  const top = CURVE_ORDER.indexOf(curve);
   for (let r = FIX_RATINGS.length - 1; r >= 0; r--) {
     const candidate = FIX_RATINGS[r]!;
     if (candidate > rating + 1e-9) continue;
     if (x.protectingIb !== null && candidate < x.protectingIb - 1e-9) break;
-    for (let k = curves.length - 1; k >= 0; k--) {
-      const cv = curves[k]!;
+    for (let k = top; k >= 0; k--) {
+      const cv = CURVE_ORDER[k]!;
       const budget = (c * u0) / (rules.multiples[cv].value * candidate);
       let ratio: number;
       if (x.knownSource) ratio = result.zs! / budget;
@@ -163,7 +186,7 @@ function findDevice(x: FixInputs, curve: Curve, rating: number): Fix | null {
         const upRatio = up > 0 ? result.upstream! / up : result.upstream! > 0 ? Number.MAX_VALUE : 0;
         ratio = Math.max(result.own! / (s * budget), upRatio);
       }
-      if (atMost(ratio, 1)) return { kind: 'device', curve: cv, rating: candidate };
+      if (atMost(ratio, 1)) return deviceFix(k, r);
     }
   }
   return null;
