@@ -103,8 +103,9 @@ export async function saveJobText(file: string, text: string, refused: RefusedFi
   return { ok: true, path: file };
 }
 
-/** Writes `data` over `file` with the care of writeFileSafely, without a backup (for outputs
- *  such as an exported PDF). On failure `file` is untouched and no temporary file is left. */
+/** Writes `data` over `file` with the care of writeFileSafely, without a backup (for the app's
+ *  own files: the recent list, the window state). On failure `file` is untouched and no
+ *  temporary file is left. */
 export async function writeFileAtomic(file: string, data: string | Uint8Array): Promise<void> {
   await writeFileSafely(file, data);
 }

@@ -29,6 +29,7 @@ export function documentDate(job: Job): Date {
 interface Pen {
   width: number | null;
   stroke: string | null;
+  /** The dash operator last written. */
   dash: string | null;
   fill: string | null;
 }
@@ -71,9 +72,9 @@ function applyStroke(doc: PDFKit.PDFDocument, pen: Pen, s: Stroke): void {
     else doc.strokeColor(s.color);
     pen.stroke = s.color;
   }
-  const dash = s.dash === undefined ? '' : `${s.dash[0]} ${s.dash[1]}`;
+  const dash = s.dash === undefined ? '[] 0 d' : `[${num(s.dash[0])} ${num(s.dash[1])}] 0 d`;
   if (pen.dash !== dash) {
-    doc.addContent(s.dash === undefined ? '[] 0 d' : `[${num(s.dash[0])} ${num(s.dash[1])}] 0 d`);
+    doc.addContent(dash);
     pen.dash = dash;
   }
 }
@@ -239,7 +240,7 @@ function drawItem(doc: PDFKit.PDFDocument, faces: Faces, pen: Pen, item: Item): 
       return;
     }
     case 'text': {
-      const shown = plainText(item.text).replace(/\n/g, ''); // no control characters in the PDF (sanitise.ts)
+      const shown = plainText(item.text); // one line, no control characters in the PDF (sanitise.ts)
       if (shown === '') return;
       setFill(doc, pen, item.color ?? '#000000');
       writeText(doc, faces, item, shown);

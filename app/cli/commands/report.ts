@@ -36,13 +36,6 @@ function samePath(a: string, b: string): boolean {
   }
 }
 
-/** Never a half-written file: temporary file flushed and renamed, folder flushed, read-only
- *  files refused, links written through, an earlier PDF kept as NAME.bak (writeOutputFile in
- *  io.ts). */
-async function writePdf(path: string, data: Uint8Array): Promise<void> {
-  await writeOutputFile(path, data, { backup: true });
-}
-
 function why(error: unknown): string {
   return error instanceof Error ? (error.message.split('\n')[0] ?? '') : String(error);
 }
@@ -120,7 +113,9 @@ export const report: Command = {
     }
     try {
       if (existsSync(output) && statSync(output).isDirectory()) throw new Error(`${output} is a directory`);
-      await writePdf(output, pdf);
+      // Never half-written: temporary file flushed and renamed, folder flushed, a read-only file
+      // refused, a link written through, an earlier PDF kept as OUT.bak (writeOutputFile).
+      await writeOutputFile(output, pdf, { backup: true });
     } catch (error) {
       err(`report: could not write ${output}: ${why(error)}\n`);
       return EXIT.unusable;
