@@ -93,9 +93,30 @@ function amps(value: number): string {
   return Number.isInteger(value) && Math.abs(value) < 1e6 ? String(value) : `${Number(value.toPrecision(6))}`;
 }
 
-/** A short mark for the device: its label, or e.g. `C20` for a breaker. */
+/**
+ * A short mark for the device: its label, or e.g. `C20` for a breaker. Marks are made once per
+ * kind and rating and shared (a job has few distinct ones; the cache is emptied past 4,096).
+ */
 export function deviceMark(device: Device): string {
   if (device.label) return device.label;
+  const kind = device.type === 'mcb' ? device.curve : device.type;
+  let byRating = MARKS.get(kind);
+  if (byRating === undefined) {
+    byRating = new Map();
+    MARKS.set(kind, byRating);
+  }
+  let mark = byRating.get(device.rating);
+  if (mark === undefined) {
+    if (byRating.size >= 4096) byRating.clear();
+    mark = makeMark(device);
+    byRating.set(device.rating, mark);
+  }
+  return mark;
+}
+
+const MARKS = new Map<string, Map<number, string>>();
+
+function makeMark(device: Device): string {
   switch (device.type) {
     case 'mcb':
       return `${device.curve}${amps(device.rating)}`;

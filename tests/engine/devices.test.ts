@@ -181,4 +181,17 @@ describe('deviceMark', () => {
     expect(deviceMark({ type: 'curve', rating: 63, points: POINTS }).length).toBeGreaterThan(0);
     expect(deviceMark({ type: 'fixed', rating: 32, tripCurrent: 300 }).length).toBeGreaterThan(0);
   });
+
+  it('marks are kept per kind and rating: the same device again reads the same, another kind or rating differs', () => {
+    const first = deviceMark({ type: 'mcb', curve: 'C', rating: 20 });
+    expect(deviceMark({ type: 'mcb', curve: 'C', rating: 20, breaking: 6 })).toBe(first);
+    expect(deviceMark({ type: 'mcb', curve: 'B', rating: 20 })).toBe('B20');
+    expect(deviceMark({ type: 'fixed', rating: 20, tripCurrent: 100 })).toBe('20 A');
+    expect(deviceMark({ type: 'adjustable', rating: 20, instantaneous: 200 })).toBe('20 A adj.');
+    expect(deviceMark({ type: 'curve', rating: 20, points: POINTS })).toBe('20 A curve');
+    expect(deviceMark({ type: 'mcb', curve: 'C', rating: 20.5 })).toBe('C20.5');
+    // Past the cache's 4,096 ratings per kind it starts again; marks stay right.
+    for (let r = 1; r <= 5000; r++) expect(deviceMark({ type: 'mcb', curve: 'D', rating: r })).toBe(`D${r}`);
+    expect(deviceMark({ type: 'mcb', curve: 'D', rating: 7 })).toBe('D7');
+  });
 });
