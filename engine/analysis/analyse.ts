@@ -220,6 +220,8 @@ function checkOne(state: State, l: number): void {
   const reached = sums.reached(l);
   const to = order.linkTo[l]!;
   const from = order.linkFrom[l]!;
+  // Notes a circuit often carries are joined, not templated: a template's result keeps each piece
+  // as a string of its own for as long as the results live.
   const notes = result.notes;
   result.phases = asPhases(phases.link[l]!);
 
@@ -236,7 +238,7 @@ function checkOne(state: State, l: number): void {
     if (result.voltageDropLimit !== null) {
       result.voltageStatus = atMost(total, result.voltageDropLimit) ? 'pass' : 'fail';
       if (result.voltageStatus === 'fail') {
-        notes.push(`voltage drop: the total ${fixedOrRange(total, 2, ' %')} from the supply to ${link.to} exceeds the limit ${result.voltageDropLimit} %`);
+        notes.push(['voltage drop: the total ', fixedOrRange(total, 2, ' %'), ' from the supply to ', link.to, ' exceeds the limit ', String(result.voltageDropLimit), ' %'].join(''));
       }
     }
   }
@@ -257,7 +259,7 @@ function checkOne(state: State, l: number): void {
   if (own?.breaking !== undefined && result.faultLevel !== null) {
     result.breakingStatus = own.breaking * 1000 >= result.faultLevel * (1 - 1e-9) ? 'pass' : 'fail';
     if (result.breakingStatus === 'fail') {
-      notes.push(`breaking capacity: the device's ${own.breaking} kA is below the ${kA(result.faultLevel)} maximum prospective fault current at its origin`);
+      notes.push(["breaking capacity: the device's ", String(own.breaking), ' kA is below the ', kA(result.faultLevel), ' maximum prospective fault current at its origin'].join(''));
     }
   }
 
@@ -424,7 +426,7 @@ function measuredResult(result: CircuitResult, budget: number | null, device: De
   let status: Status = atMost(ratio, 1) ? 'pass' : 'fail';
   const protecting = sums.order.links[protectingIndex]!;
   if (status === 'fail') {
-    result.notes.push(`measured: the reading ${reading.zs} Ω, corrected to ${fixedOrRange(corrected, 3, ' Ω')}, exceeds the limit ${fixedOrRange(budget, 3, ' Ω')} (largest passing reading ${fixedOrRange(result.testLimit, 3, ' Ω')})`);
+    result.notes.push(['measured: the reading ', String(reading.zs), ' Ω, corrected to ', fixedOrRange(corrected, 3, ' Ω'), ', exceeds the limit ', fixedOrRange(budget, 3, ' Ω'), ' (largest passing reading ', fixedOrRange(result.testLimit, 3, ' Ω'), ')'].join(''));
     if (protecting.rcd) status = 'rcd';
   }
   result.measured = { zs: reading.zs, corrected, ratio, status };

@@ -58,15 +58,15 @@ export function applyCapacity(link: Link, phases: number, ib: number | null, rat
   if (rating !== null) {
     if (!atMost(ib, rating)) {
       ok = false;
-      notes.push(`capacity: Ib ≤ In fails: the design current ${amps(ib)} exceeds the device rating ${amps(rating)}`);
+      notes.push(['capacity: Ib ≤ In fails: the design current ', amps(ib), ' exceeds the device rating ', amps(rating)].join(''));
     }
     if (!atMost(rating, iz)) {
       ok = false;
-      notes.push(`capacity: In ≤ Iz fails: the device rating ${amps(rating)} exceeds the cable's capacity ${amps(iz)}`);
+      notes.push(['capacity: In ≤ Iz fails: the device rating ', amps(rating), " exceeds the cable's capacity ", amps(iz)].join(''));
     }
   } else if (!atMost(ib, iz)) {
     ok = false;
-    notes.push(`capacity: Ib ≤ Iz fails: the design current ${amps(ib)} exceeds the cable's capacity ${amps(iz)}`);
+    notes.push(['capacity: Ib ≤ Iz fails: the design current ', amps(ib), " exceeds the cable's capacity ", amps(iz)].join(''));
   }
   return { iz, status: ok ? 'pass' : 'fail' };
 }

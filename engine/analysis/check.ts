@@ -288,8 +288,8 @@ export function checkLoopInto(sums: Sums, l: number, result: CircuitResult, tabl
   const protectingLink = order.links[protecting]!;
   if (status === 'fail' && protectingLink.rcd) {
     status = 'rcd';
-    notes.push(`disconnection relies on the ${toFixed(protectingLink.rcd.sensitivity * 1000, 0)} mA RCD of ${protectingLink.id}`);
+    notes.push(['disconnection relies on the ', toFixed(protectingLink.rcd.sensitivity * 1000, 0), ' mA RCD of ', protectingLink.id].join(''));
   }
-  if (protecting !== l) notes.push(`protected by the device of ${protectingLink.id}`);
+  if (protecting !== l) notes.push(['protected by the device of ', protectingLink.id].join(''));
   result.status = status;
 }

@@ -42,6 +42,6 @@ export function checkWithstand(link: Link, device: Device | null, knownSource: b
   return {
     earthMinArea: min,
     status: 'fail',
-    notes: [`withstand: the protective conductor ${Number.isFinite(area) ? `${area} mm²` : 'out of range'} is below the ${fixedOrRange(min, 2, ' mm²')} it needs to carry the fault until the device clears it (S = √(I²t) / k, k = ${k})`],
+    notes: [['withstand: the protective conductor ', Number.isFinite(area) ? `${area} mm²` : 'out of range', ' is below the ', fixedOrRange(min, 2, ' mm²'), ' it needs to carry the fault until the device clears it (S = √(I²t) / k, k = ', String(k), ')'].join('')],
   };
 }
