@@ -245,9 +245,7 @@ function checkOne(state: State, l: number): void {
 
   // Capacity: Ib ≤ In ≤ Iz.
   const rating = device ? device.rating : null;
-  const capacity = applyCapacity(link, result.phases, result.designCurrent, rating, rules, notes);
-  result.capacity = capacity.iz;
-  result.capacityStatus = capacity.status;
+  applyCapacity(link, result.phases, result.designCurrent, rating, rules, notes, result);
 
   // Fault level at the origin and the breaking capacity of the link's own device.
   if (reached && from >= 0) {
@@ -264,10 +262,7 @@ function checkOne(state: State, l: number): void {
   }
 
   // Withstand of the protective conductor.
-  const withstand = checkWithstand(link, device, loop.knownSource(l), result.faultCurrent, loop.zeroLoop[l] === 1, result.clearingTime);
-  result.earthMinArea = withstand.earthMinArea;
-  result.withstandStatus = withstand.status;
-  if (withstand.notes.length > 0) notes.push(...withstand.notes);
+  checkWithstand(link, device, loop.knownSource(l), result.faultCurrent, loop.zeroLoop[l] === 1, result.clearingTime, notes, result);
 
   // Measured reading and the test limit.
   measuredResult(result, budget, device, loop.protecting[l]!, l, sums, rules);

@@ -37,13 +37,20 @@ export function cableCapacity(link: Link, phases: number, rules: ResolvedRules):
 /** Ib ≤ In ≤ Iz, or Ib ≤ Iz alone for a link without a protecting device. */
 export function checkCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules): CapacityResult {
   const notes: string[] = [];
-  const status = applyCapacity(link, phases, ib, rating, rules, notes);
-  return { iz: status.iz, status: status.status, notes };
+  const out: CapacityInto = { capacity: null, capacityStatus: 'unchecked' };
+  applyCapacity(link, phases, ib, rating, rules, notes, out);
+  return { iz: out.capacity, status: out.capacityStatus, notes };
 }
 
-/** The capacity check with its notes added to `notes`: what the analysis calls for each link
- *  (no objects made for a link that passes or is not checked). */
-export function applyCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules, notes: string[]): { iz: number | null; status: CheckStatus } {
+/** Where applyCapacity writes: a circuit's results, or any object with these two fields. */
+export interface CapacityInto {
+  capacity: number | null;
+  capacityStatus: CheckStatus;
+}
+
+/** The capacity check with its notes added to `notes` and Iz and the status written into `out`:
+ *  what the analysis calls for each link (no objects made for a link that passes). */
+export function applyCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules, notes: string[], out: CapacityInto): void {
   const cable = link.cable;
   let iz: number | null;
   if (cable.capacity !== undefined) iz = cable.capacity;
@@ -53,7 +60,9 @@ export function applyCapacity(link: Link, phases: number, ib: number | null, rat
     iz = found.iz;
     if (found.note) notes.push(found.note);
   }
-  if (ib === null || iz === null) return iz === null ? UNCHECKED_NO_IZ : { iz, status: 'unchecked' };
+  out.capacity = iz;
+  out.capacityStatus = 'unchecked';
+  if (ib === null || iz === null) return;
   let ok = true;
   if (rating !== null) {
     if (!atMost(ib, rating)) {
@@ -68,7 +77,5 @@ export function applyCapacity(link: Link, phases: number, ib: number | null, rat
     ok = false;
     notes.push(['capacity: Ib ≤ Iz fails: the design current ', amps(ib), " exceeds the cable's capacity ", amps(iz)].join(''));
   }
-  return { iz, status: ok ? 'pass' : 'fail' };
+  out.capacityStatus = ok ? 'pass' : 'fail';
 }
-
-const UNCHECKED_NO_IZ: { iz: number | null; status: CheckStatus } = Object.freeze({ iz: null, status: 'unchecked' });

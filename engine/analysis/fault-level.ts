@@ -58,7 +58,7 @@ export function faultTable(order: TreeOrder, phases: PhaseTable, rules: Resolved
   const im = new Float64Array(nodes.length).fill(NaN);
   const imax = new Float64Array(nodes.length).fill(NaN);
   const table = { imax, re, im };
-  for (const n of pre) faultAt(table, order, phases, rules, n);
+  for (let at = 0; at < pre.length; at++) faultAt(table, order, phases, rules, pre[at]!);
   return table;
 }
 

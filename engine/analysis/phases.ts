@@ -44,7 +44,8 @@ export function phaseTable(order: TreeOrder): PhaseTable {
     else link[i] = threeBelow[to] ? 3 : 1;
   });
   const singleAbove = new Uint8Array(nodes.length);
-  for (const n of pre) {
+  for (let at = 0; at < pre.length; at++) {
+    const n = pre[at]!;
     const f = feederOf[n]!;
     if (f >= 0) singleAbove[n] = singleAbove[linkFrom[f]!]! || link[f] === 1 ? 1 : 0;
   }

@@ -45,7 +45,8 @@ export class Sums {
       const up = feederOf[from]!;
       return up >= 0 && up !== l ? this.protect[up]! : -1;
     };
-    for (const n of pre) {
+    for (let at = 0; at < pre.length; at++) {
+      const n = pre[at]!;
       const f = feederOf[n]!;
       if (f < 0) continue;
       const p = linkFrom[f]!;
@@ -58,7 +59,8 @@ export class Sums {
       const to = this.order.linkTo[l]!;
       if (to < 0 || feederOf[to] !== l) this.protect[l] = links[l]!.device ? l : -1;
     });
-    for (const n of pre) {
+    for (let at = 0; at < pre.length; at++) {
+      const n = pre[at]!;
       const node = nodes[n]!;
       if (node.kind === 'supply') this.zeBySupply[n] = sourceImpedance(node.source, rules.voltage.value);
     }

@@ -41,7 +41,8 @@ export function dropTable(order: TreeOrder, phases: PhaseTable, loads: LoadTable
     if (!Number.isNaN(ib)) own[l] = linkVoltageDrop(link, link.cable.active, phases.link[l]!, ib, loads.pf[l]!, rules);
   });
   const atNode = new Float64Array(nodes.length);
-  for (const n of pre) {
+  for (let at = 0; at < pre.length; at++) {
+    const n = pre[at]!;
     const f = feederOf[n]!;
     if (f < 0) continue;
     // a link with Ib null adds 0; a drop made NaN by extreme values makes the totals below NaN

@@ -10,24 +10,25 @@ import type { CheckStatus } from './results.js';
 import { kFactor } from './k-table.js';
 import { atMost, fixedOrRange } from './tolerance.js';
 
-export interface WithstandResult {
+/** Where the check writes: a circuit's results, or any object with these two fields. */
+export interface WithstandInto {
   earthMinArea: number | null;
-  status: CheckStatus;
-  notes: string[];
+  withstandStatus: CheckStatus;
 }
 
-const UNCHECKED: WithstandResult = Object.freeze({ earthMinArea: null, status: 'unchecked', notes: Object.freeze([]) as unknown as string[] });
-const NO_NOTES = Object.freeze([]) as unknown as string[];
-
 /**
+ * The adiabatic check of link l's protective conductor, its minimum area and status written into
+ * `out` and its note (when it fails) added to `notes`; no objects made for a link that passes.
  * faultCurrent null with zeroLoop true: a loop of 0 Ω, checked only through the let-through.
  * clearing: the device's time at the fault current (null when unknown).
  */
-export function checkWithstand(link: Link, device: Device | null, knownSource: boolean, faultCurrent: number | null, zeroLoop: boolean, clearing: number | null): WithstandResult {
-  if (!device || !knownSource || clearing === null) return UNCHECKED;
+export function checkWithstand(link: Link, device: Device | null, knownSource: boolean, faultCurrent: number | null, zeroLoop: boolean, clearing: number | null, notes: string[], out: WithstandInto): void {
+  out.earthMinArea = null;
+  out.withstandStatus = 'unchecked';
+  if (!device || !knownSource || clearing === null) return;
   let energy: number;
   if (faultCurrent === null) {
-    if (!zeroLoop || device.letThrough === undefined) return UNCHECKED;
+    if (!zeroLoop || device.letThrough === undefined) return;
     energy = device.letThrough;
   } else {
     energy = faultCurrent * faultCurrent * clearing;
@@ -37,11 +38,11 @@ export function checkWithstand(link: Link, device: Device | null, knownSource: b
   const k = kFactor(cable.earthMaterial ?? cable.material, cable.insulation ?? 'pvc', cable.earthInCable ?? true);
   const min = Math.sqrt(energy) / k;
   const area = cable.earth * (cable.parallel ?? 1);
-  // The shared empty, frozen list of notes: callers copy notes out, never add to them.
-  if (atMost(min, area)) return { earthMinArea: min, status: 'pass', notes: NO_NOTES };
-  return {
-    earthMinArea: min,
-    status: 'fail',
-    notes: [['withstand: the protective conductor ', Number.isFinite(area) ? `${area} mm²` : 'out of range', ' is below the ', fixedOrRange(min, 2, ' mm²'), ' it needs to carry the fault until the device clears it (S = √(I²t) / k, k = ', String(k), ')'].join('')],
-  };
+  out.earthMinArea = min;
+  if (atMost(min, area)) {
+    out.withstandStatus = 'pass';
+    return;
+  }
+  out.withstandStatus = 'fail';
+  notes.push(['withstand: the protective conductor ', Number.isFinite(area) ? `${area} mm²` : 'out of range', ' is below the ', fixedOrRange(min, 2, ' mm²'), ' it needs to carry the fault until the device clears it (S = √(I²t) / k, k = ', String(k), ')'].join(''));
 }
