@@ -12,12 +12,6 @@ import { tableCapacity } from './capacity-table.js';
 import type { CheckStatus } from './results.js';
 import { atMost } from './tolerance.js';
 
-export interface CapacityResult {
-  iz: number | null;
-  status: CheckStatus;
-  notes: string[];
-}
-
 const amps = (v: number): string => {
   const shown = Number(v.toPrecision(4)); // near the largest double, 4 figures round up to Infinity
   return Number.isFinite(shown) ? `${shown} A` : Number.isFinite(v) ? `${v} A` : 'out of range';
@@ -34,22 +28,15 @@ export function cableCapacity(link: Link, phases: number, rules: ResolvedRules):
   return { iz: perSet * (cable.derating ?? 1) * (cable.parallel ?? 1) };
 }
 
-/** Ib ≤ In ≤ Iz, or Ib ≤ Iz alone for a link without a protecting device. */
-export function checkCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules): CapacityResult {
-  const notes: string[] = [];
-  const out: CapacityInto = { capacity: null, capacityStatus: 'unchecked' };
-  applyCapacity(link, phases, ib, rating, rules, notes, out);
-  return { iz: out.capacity, status: out.capacityStatus, notes };
-}
-
 /** Where applyCapacity writes: a circuit's results, or any object with these two fields. */
 export interface CapacityInto {
   capacity: number | null;
   capacityStatus: CheckStatus;
 }
 
-/** The capacity check with its notes added to `notes` and Iz and the status written into `out`:
- *  what the analysis calls for each link (no objects made for a link that passes). */
+/** The capacity check, Ib ≤ In ≤ Iz (Ib ≤ Iz alone for a link without a protecting device): its
+ *  notes added to `notes`, Iz and the status written into `out` (no objects made for a link that
+ *  passes). */
 export function applyCapacity(link: Link, phases: number, ib: number | null, rating: number | null, rules: ResolvedRules, notes: string[], out: CapacityInto): void {
   const cable = link.cable;
   let iz: number | null;
