@@ -1,7 +1,7 @@
 // Limits on a job file, checked before the loader looks at anything, so that a huge or deeply
 // nested file is refused at once, saying which limit and where, instead of running the loader,
-// the analysis or a save out of memory or stack. Every check here is a plain loop (no
-// recursion), linear in the text or the value, and stops at the first limit passed. The size,
+// the analysis or a save out of memory or stack. Every check here is a plain loop, or a
+// walk whose recursion stops at the depth limit (never more than 10 frames), linear in the text or the value, and stops at the first limit passed. The size,
 // and a bound on how many objects and lists JSON.parse could build, are checked on the text
 // before JSON.parse; the exact depth and element counts on the parsed value (see checkLimits).
 //
@@ -98,71 +98,50 @@ export function checkLimits(text: string): Problem | null {
   return opens > LIMITS.elements ? scanLimits(text) : null;
 }
 
+/** What the walk of a parsed value found: within the limits, too deep, or too many elements. */
+const WITHIN = 0;
+const TOO_DEEP = 1;
+const TOO_MANY = 2;
+
 /**
- * The depth and element limits on a parsed value, walked with a stack of its own (never
- * recursion). On a value past a limit, the problem comes from scanning `text`, its source, so
- * that it names the path and the line and column.
+ * The depth and element limits on a parsed value. The walk recurses, but never deeper than the
+ * depth limit + 1 levels (it stops at the first container past the limit), so the file cannot
+ * make the stack deep: at most 10 frames, whatever it holds. On a value past a limit, the problem
+ * comes from scanning `text`, its source, so that it names the path and the line and column.
  */
 export function checkValueLimits(value: unknown, text: string): Problem | null {
-  // A stack of open containers: a list stays on it while its items are walked (by `next`), so
-  // a list of 90,000 records is never copied onto it; an object is replaced by its members that
-  // are containers (a few). The stack stays as short as the nesting is deep.
-  const open: unknown[] = [value];
-  const depths: number[] = [1];
-  const next: number[] = [0];
-  let items = 0;
-  const deep = (): Problem => scanLimits(text) ?? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`);
-  while (open.length > 0) {
-    const top = open.length - 1;
-    const v = open[top];
-    const depth = depths[top]!;
-    if (typeof v !== 'object' || v === null) {
-      open.pop();
-      depths.pop();
-      next.pop();
-      continue;
-    }
-    if (Array.isArray(v)) {
-      let i = next[top]!;
-      if (i === 0) {
-        if (depth > LIMITS.depth) return deep();
-        items += v.length;
-        if (items > LIMITS.elements) return scanLimits(text) ?? problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`);
-      }
-      let child: unknown = null;
-      while (i < v.length) {
-        const x: unknown = v[i++];
-        if (typeof x === 'object' && x !== null) {
-          child = x;
-          break;
-        }
-      }
-      if (child === null) {
-        open.pop();
-        depths.pop();
-        next.pop();
-        continue;
-      }
-      next[top] = i;
-      open.push(child);
-      depths.push(depth + 1);
-      next.push(0);
-      continue;
-    }
-    open.pop();
-    depths.pop();
-    next.pop();
-    if (depth > LIMITS.depth) return deep();
-    for (const key in v) {
-      const x = (v as Record<string, unknown>)[key];
+  if (typeof value !== 'object' || value === null) return null;
+  const counter = { items: 0 };
+  const found = walkValue(value, 1, counter);
+  if (found === WITHIN) return null;
+  if (found === TOO_DEEP) return scanLimits(text) ?? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`);
+  return scanLimits(text) ?? problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`);
+}
+
+/** Walk one container at `depth` (the file object is 1) and what it holds; see checkValueLimits. */
+function walkValue(v: object, depth: number, counter: { items: number }): number {
+  if (depth > LIMITS.depth) return TOO_DEEP;
+  if (Array.isArray(v)) {
+    const n = v.length;
+    counter.items += n;
+    if (counter.items > LIMITS.elements) return TOO_MANY;
+    for (let i = 0; i < n; i++) {
+      const x: unknown = v[i];
       if (typeof x === 'object' && x !== null) {
-        open.push(x);
-        depths.push(depth + 1);
-        next.push(0);
+        const found = walkValue(x, depth + 1, counter);
+        if (found !== WITHIN) return found;
       }
+    }
+    return WITHIN;
+  }
+  for (const key in v) {
+    const x = (v as Record<string, unknown>)[key];
+    if (typeof x === 'object' && x !== null) {
+      const found = walkValue(x, depth + 1, counter);
+      if (found !== WITHIN) return found;
     }
   }
-  return null;
+  return WITHIN;
 }
 
 /** The first depth or element limit the text passes, by scanning all of it; null when within. */
