@@ -48,20 +48,48 @@ export function checkGraph(
   const nl = links.length;
   // Each node's kind as a number (read once: node records come in many shapes).
   const kind = new Uint8Array(nn);
+  // Ids: one set per record while every id is new (the map's size tells when one was not); at
+  // the first repeat the record that had the id first is found by a scan, put back, and the rest
+  // is read with a lookup before each set. One scan at most per list, so linear in any file.
+  const already = (id: string, before: number) => `id ${JSON.stringify(id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`;
+  /** The code of the first node, or else link before link `uptoLink`, that has the id. */
+  const firstHolder = (id: string, uptoNode: number, uptoLink: number): number => {
+    for (let n = 0; n < uptoNode; n++) if (nodes[n]!.id === id) return n;
+    for (let l = 0; l < uptoLink; l++) if (links[l]!.id === id) return -1 - l;
+    return -1; // not reached: the map held the id, so a record before this one has it
+  };
+  let repeated = false;
   for (let i = 0; i < nn; i++) {
     const node = nodes[i]!;
     const k = node.kind;
     kind[i] = k === 'supply' ? SUPPLY : k === 'board' ? BOARD : POINT;
     const id = node.id;
-    const before = seen.get(id);
-    if (before === undefined) seen.set(id, i);
-    else new Site(problems, `nodes[${nodePlace(i)}] (${id})`, id).report('id', `id ${JSON.stringify(id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+    if (!repeated) {
+      const size = seen.size;
+      seen.set(id, i);
+      if (seen.size > size) continue;
+      repeated = true;
+      seen.set(id, firstHolder(id, i, 0));
+    } else if (!seen.has(id)) {
+      seen.set(id, i);
+      continue;
+    }
+    new Site(problems, `nodes[${nodePlace(i)}] (${id})`, id).report('id', already(id, seen.get(id)!));
   }
+  repeated = false;
   for (let i = 0; i < nl; i++) {
     const id = links[i]!.id;
-    const before = seen.get(id);
-    if (before === undefined) seen.set(id, -1 - i);
-    else linkSite(i).report('id', `id ${JSON.stringify(id)} is already used by ${placeOf(before)}; ids must be unique across nodes and links`);
+    if (!repeated) {
+      const size = seen.size;
+      seen.set(id, -1 - i);
+      if (seen.size > size) continue;
+      repeated = true;
+      seen.set(id, firstHolder(id, nn, i));
+    } else if (!seen.has(id)) {
+      seen.set(id, -1 - i);
+      continue;
+    }
+    linkSite(i).report('id', already(id, seen.get(id)!));
   }
 
   // Each node's feeding link and the node above it, by position in `nodes`.

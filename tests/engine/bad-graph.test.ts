@@ -38,6 +38,24 @@ describe('graph rules', () => {
     expect(p.some((x) => x.where === 'links[2] (C1)' && x.field === 'id'), listing(p)).toBe(true);
   });
 
+  it('every repeat of an id names the record that had it first, in nodes and in links', () => {
+    // Three boards called P1 (the first is the point), and links that reuse a node's id and a link's.
+    const p = errors(jobFile({
+      nodes: [...nodes(), board('P1'), board('P1'), board('DB1')],
+      links: [m1(), c('C1', 'MSB', 'P1'), c('P2', 'MSB', 'DB1'), c('C1', 'MSB', 'P2'), c('C1', 'S1', 'P2')],
+    }));
+    const ids = p.filter((x) => x.field === 'id').map((x) => `${x.where}: ${x.message}`);
+    expect(ids, listing(p)).toEqual([
+      'nodes[4] (P1): id "P1" is already used by nodes[2] (P1); ids must be unique across nodes and links',
+      'nodes[5] (P1): id "P1" is already used by nodes[2] (P1); ids must be unique across nodes and links',
+      'links[2] (P2): id "P2" is already used by nodes[3] (P2); ids must be unique across nodes and links',
+      'links[3] (C1): id "C1" is already used by links[1] (C1); ids must be unique across nodes and links',
+      'links[4] (C1): id "C1" is already used by links[1] (C1); ids must be unique across nodes and links',
+    ]);
+    // from and to name the first node with the id: C1 feeds the point P1, not a board P1.
+    expect(p.some((x) => x.field === 'from' || (x.field === 'to' && x.message.includes('not a node'))), listing(p)).toBe(false);
+  });
+
   it('from names no node', () => {
     const p = errors(jobFile({ nodes: nodes(), links: [m1(), c('C1', 'DB9', 'P1')] }));
     expect(p.some((x) => x.where === 'links[1] (C1)' && x.field === 'from' && x.message.includes('DB9')), listing(p)).toBe(true);
