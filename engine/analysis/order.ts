@@ -8,6 +8,7 @@
 
 import type { Job, JobNode, Link, NodeKind, SupplyNode } from '../model/types.js';
 import type { LinkRole } from './results.js';
+import { IdTable, type IdLookup } from '../model/id-table.js';
 
 /** A link's role from the kinds of its two ends (undefined for an end that is not in the job):
  *  into a point it is a final subcircuit, out of a supply the consumer mains, else a submain. */
@@ -19,7 +20,7 @@ export function roleOfEnds(fromKind: NodeKind | undefined, toKind: NodeKind | un
 
 /** What the loader worked out about a job's ids, by the nodes list it was worked out for. */
 interface SharedIds {
-  ids: ReadonlyMap<string, number>;
+  ids: IdLookup;
   links: readonly Link[];
   /** The ids and ends as they were, to see that the lists were not edited since. */
   nodeIds: string[];
@@ -37,7 +38,7 @@ const shared = new WeakMap<readonly JobNode[], SharedIds>();
  * the same lengths, with every node's id and every link's ends as they were (so an edited list,
  * even one edited in place, is indexed afresh).
  */
-export function shareIds(nodes: readonly JobNode[], links: readonly Link[], ids: ReadonlyMap<string, number>, linkFrom: Int32Array, linkTo: Int32Array): void {
+export function shareIds(nodes: readonly JobNode[], links: readonly Link[], ids: IdLookup, linkFrom: Int32Array, linkTo: Int32Array): void {
   const nodeIds = new Array<string>(nodes.length);
   for (let i = 0; i < nodes.length; i++) nodeIds[i] = nodes[i]!.id;
   const fromIds = new Array<string>(links.length);
@@ -65,7 +66,7 @@ export class TreeOrder {
   readonly nodes: readonly JobNode[];
   readonly links: readonly Link[];
   /** Each node id's index (ids of links may map to negative numbers: not nodes). */
-  readonly nodeIndex: ReadonlyMap<string, number>;
+  readonly nodeIndex: IdLookup;
   /** Node index of each link's origin and far end (−1 when missing). */
   readonly linkFrom: Int32Array;
   readonly linkTo: Int32Array;
@@ -90,7 +91,7 @@ export class TreeOrder {
    * `ids`, when given, is where each id is (graph-rules.ts): a node's index (≥ 0), or a negative
    * number for a link's id; the loader passes it so the ids are not indexed twice.
    */
-  constructor(job: Job, ids?: ReadonlyMap<string, number>) {
+  constructor(job: Job, ids?: IdLookup) {
     const nodes = job.nodes;
     const links = job.links;
     this.nodes = nodes;
@@ -101,7 +102,7 @@ export class TreeOrder {
     if (ids) this.nodeIndex = ids;
     else if (known) this.nodeIndex = known.ids;
     else {
-      const index = new Map<string, number>();
+      const index = new IdTable(nn);
       for (let i = 0; i < nn; i++) {
         const id = nodes[i]!.id;
         if (!index.has(id)) index.set(id, i);

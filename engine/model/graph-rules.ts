@@ -5,9 +5,10 @@
 import type { JobNode, Link } from './types.js';
 import type { Problem } from './problems.js';
 import { Site } from './fields.js';
+import { IdTable } from './id-table.js';
 
 /** Where each id was first used: a position in `nodes` (≥ 0) or in `links` (−1 − position). */
-export type IdPlaces = Map<string, number>;
+export type IdPlaces = IdTable;
 
 const SUPPLY = 0;
 const BOARD = 1;
@@ -41,7 +42,7 @@ export function checkGraph(
     const id = links[i]!.id;
     return new Site(problems, () => `links[${linkPlace(i)}] (${id})`, id);
   };
-  const seen: IdPlaces = new Map();
+  const seen: IdPlaces = new IdTable(nodes.length + links.length);
   const placeOf = (code: number): string =>
     code >= 0 ? `nodes[${nodePlace(code)}] (${nodes[code]!.id})` : `links[${linkPlace(-1 - code)}] (${links[-1 - code]!.id})`;
   const nn = nodes.length;
