@@ -1,9 +1,11 @@
 // Limits on a job file, checked before the loader looks at anything, so that a huge or deeply
 // nested file is refused at once, saying which limit and where, instead of running the loader,
 // the analysis or a save out of memory or stack. Every check here is a plain loop, or a
-// walk whose recursion stops at the depth limit (never more than 10 frames), linear in the text or the value, and stops at the first limit passed. The size,
-// and a bound on how many objects and lists JSON.parse could build, are checked on the text
-// before JSON.parse; the exact depth and element counts on the parsed value (see checkLimits).
+// walk whose recursion stops at the depth limit (never more than 10 frames), linear in the text
+// or the value, and stops at the first limit passed. The size, and a bound on how many objects
+// and lists JSON.parse could build, are checked on the text before JSON.parse; the exact depth
+// and element counts on the parsed value (see checkLimits): walked whole (checkValueLimits), or,
+// for a file of the current version, record by record as the loader reads it (LimitCount).
 //
 // The limits (documented in engine/model/FORMAT.md, "Limits"):
 // - size: at most 50 MiB of text (52,428,800 characters; a file read from disk is held to the
@@ -111,11 +113,66 @@ const TOO_MANY = 2;
  */
 export function checkValueLimits(value: unknown, text: string): Problem | null {
   if (typeof value !== 'object' || value === null) return null;
-  const counter = { items: 0 };
-  const found = walkValue(value, 1, counter);
-  if (found === WITHIN) return null;
-  if (found === TOO_DEEP) return scanLimits(text) ?? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`);
-  return scanLimits(text) ?? problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`);
+  const count = new LimitCount();
+  count.found = walkValue(value, 1, count);
+  return count.passed ? count.problem(text) : null;
+}
+
+/**
+ * The depth and element limits counted as the loader reads a current-version file (parseJob):
+ * the file object's own keys other than the records are walked first (`file`), then each record
+ * as the loader comes to it (`record`, before anything else looks at it). A record its quick
+ * check passed and that holds no key the definitions do not know nests no deeper than the format
+ * (FORMAT_DEPTH), so only its list items are counted (`shape`, generated/clean.ts); any other
+ * record is walked as checkValueLimits walks. The same limits as checkValueLimits, without a
+ * second walk over every record.
+ */
+export class LimitCount {
+  items = 0;
+  found = WITHIN;
+
+  get passed(): boolean {
+    return this.found !== WITHIN;
+  }
+
+  /** The file object's keys: `records` lists (nodes, links) counted by length, the rest walked. */
+  file(value: Record<string, unknown>, records: readonly string[]): boolean {
+    for (const key in value) {
+      const x = value[key];
+      if (records.includes(key) && Array.isArray(x)) this.add(x.length);
+      else if (typeof x === 'object' && x !== null) this.walk(x, 2);
+      if (this.found !== WITHIN) return false;
+    }
+    return true;
+  }
+
+  /** One record of a list of the file object (depth 3); `shape` its list items, or −1: walk it. */
+  record(value: unknown, shape: number): boolean {
+    if (this.found !== WITHIN) return false;
+    if (shape >= 0) return this.add(shape);
+    if (typeof value === 'object' && value !== null) this.walk(value, 3);
+    return this.found === WITHIN;
+  }
+
+  private add(items: number): boolean {
+    this.items += items;
+    if (this.items > LIMITS.elements) this.found = TOO_MANY;
+    return this.found === WITHIN;
+  }
+
+  private walk(value: object, depth: number): void {
+    this.found = walkValue(value, depth, this);
+  }
+
+  /** The problem to report once a limit is passed (the place found by scanning `text`). */
+  problem(text: string): Problem {
+    return (
+      scanLimits(text) ??
+      (this.found === TOO_DEEP
+        ? problem(`the file nests objects and lists more than ${LIMITS.depth} levels deep; nothing was read`)
+        : problem(`the file has more than ${LIMITS.elements.toLocaleString('en')} elements; nothing was read`))
+    );
+  }
 }
 
 /** Walk one container at `depth` (the file object is 1) and what it holds; see checkValueLimits. */

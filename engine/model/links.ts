@@ -5,7 +5,8 @@ import type { Link } from './types.js';
 import type { Problem } from './problems.js';
 import { isObject, Site, type Json } from './fields.js';
 import { reportFields } from './check-spec.js';
-import { cleanLink } from './generated/clean.js';
+import { cleanLink, shapeLink } from './generated/clean.js';
+import type { LimitCount } from './limits.js';
 import * as schema from './schema.js';
 
 export const INSULATIONS = schema.INSULATIONS;
@@ -13,8 +14,13 @@ export const INSULATIONS = schema.INSULATIONS;
 const usable = (v: unknown): boolean => typeof v === 'string' && v.trim() !== '';
 
 /** Checks one link's own fields; returns it when it has usable id, from and to (for the graph rules). */
-export function validateLink(value: unknown, index: number, problems: Problem[]): Link | undefined {
-  if (cleanLink(value)) return value as Link; // the parsed object itself: loading never changes it
+export function validateLink(value: unknown, index: number, problems: Problem[], limits?: LimitCount): Link | undefined {
+  if (cleanLink(value)) {
+    limits?.record(value, shapeLink(value));
+    return value as Link; // the parsed object itself: loading never changes it
+  }
+  // The limits first (parseJob): nothing below walks a value nested past them.
+  if (limits !== undefined && !limits.record(value, -1)) return undefined;
   const rawId = isObject(value) && typeof value.id === 'string' && value.id !== '' ? value.id : undefined;
   const site = new Site(problems, () => (rawId ? `links[${index}] (${rawId})` : `links[${index}]`), rawId);
   if (!isObject(value)) {

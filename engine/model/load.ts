@@ -14,7 +14,7 @@ import { checkGraph } from './graph-rules.js';
 import { shareIds } from '../analysis/order.js';
 import { checkPhases } from './phase-rules.js';
 import { sizeWarnings } from './sizes.js';
-import { checkLimits, checkValueLimits, jsonSyntaxError } from './limits.js';
+import { checkLimits, checkValueLimits, jsonSyntaxError, LimitCount } from './limits.js';
 
 export type LoadResult =
   | { ok: true; job: Job; warnings: Problem[]; migratedFrom: number | null }
@@ -40,9 +40,25 @@ export function parseJob(text: string): LoadResult {
     const detail = e instanceof Error ? e.message : String(e);
     return fileProblem(`the file is not valid JSON (${jsonSyntaxError(source) ?? `${detail.replace(/[\u0000-\u001f\u007f-\u009f]+/g, ' ')}${lineAndColumn(source, detail)}`})`);
   }
-  const deep = checkValueLimits(value, source);
-  if (deep !== null) return { ok: false, problems: [deep] };
-  return loadJob(value);
+  if (!isCurrentFile(value)) {
+    const deep = checkValueLimits(value, source);
+    if (deep !== null) return { ok: false, problems: [deep] };
+    return loadJob(value);
+  }
+  // A file of the current version: its records are counted against the depth and element
+  // limits as the loader reads them, each before anything else looks at it (LimitCount), so a
+  // valid file is walked once, not twice. A limit passed stops the reading.
+  const limits = new LimitCount();
+  if (!limits.file(value, RECORD_LISTS)) return { ok: false, problems: [limits.problem(source)] };
+  const loaded = loadJob(value, MIGRATIONS, limits);
+  return limits.passed ? { ok: false, problems: [limits.problem(source)] } : loaded;
+}
+
+const RECORD_LISTS = ['nodes', 'links'];
+
+/** A job file of the current version with lists of nodes and links (parseJob's counted path). */
+function isCurrentFile(value: unknown): value is Json {
+  return isObject(value) && value.format === FORMAT_NAME && value.version === CURRENT_VERSION && Array.isArray(value.nodes) && Array.isArray(value.links);
 }
 
 /** ", line 3 column 7" for a JSON error message that gives a character position. */
@@ -55,8 +71,12 @@ function lineAndColumn(text: string, message: string): string {
   return `, line ${line} column ${column}`;
 }
 
-/** Read a job from an already-parsed file object (or anything else). */
-export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS): LoadResult {
+/**
+ * Read a job from an already-parsed file object (or anything else). `limits`, from parseJob
+ * only, counts a current-version file's records against the limits as they are read (the rest
+ * of the file already counted); once it has passed one the result is to be thrown away.
+ */
+export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS, limits?: LimitCount): LoadResult {
   if (!isObject(value)) return fileProblem('the file is not a Loopwright job: expected a JSON object');
   if (value.format !== FORMAT_NAME) {
     return fileProblem(`the file is not a Loopwright job: format must be "${FORMAT_NAME}", got ${JSON.stringify(value.format)}`);
@@ -72,7 +92,7 @@ export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS
   }
   const migrated = migrate(value, version, CURRENT_VERSION, chain);
   if (!migrated.ok) return fileProblem(migrated.message);
-  return validateFile(migrated.file, migrated.migratedFrom);
+  return validateFile(migrated.file, migrated.migratedFrom, migrated.migratedFrom === null ? limits : undefined);
 }
 
 /**
@@ -82,8 +102,9 @@ export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS
  */
 function keptRecords<R>(
   raw: unknown[],
-  validate: (value: unknown, index: number, problems: Problem[]) => R | undefined,
+  validate: (value: unknown, index: number, problems: Problem[], limits?: LimitCount) => R | undefined,
   problems: Problem[],
+  limits: LimitCount | undefined,
 ): { records: R[]; at: number[] | null } {
   let records: R[] | null = null; // null: so far every record passed, and raw is the list
   let at: number[] | null = null;
@@ -91,7 +112,8 @@ function keptRecords<R>(
     // A hole in a sparse list is skipped, as forEach would (the editor checks only the records
     // an edit touched, each at its own index in otherwise empty lists).
     const present = index in raw;
-    const record = present ? validate(raw[index], index, problems) : undefined;
+    if (limits?.passed) break; // a limit passed: the reading stops (parseJob reports it)
+    const record = present ? validate(raw[index], index, problems, limits) : undefined;
     if (records === null) {
       if (record !== undefined) continue;
       // The first record left out: the ones before it are kept, each at its own place.
@@ -107,7 +129,7 @@ function keptRecords<R>(
   return records === null ? { records: raw as R[], at: null } : { records, at };
 }
 
-function validateFile(file: Json, migratedFrom: number | null): LoadResult {
+function validateFile(file: Json, migratedFrom: number | null, limits?: LimitCount): LoadResult {
   const problems: Problem[] = [];
   const top = new Site(problems, 'file');
   const details = validateDetails(file.job, new Site(problems, 'job'));
@@ -119,9 +141,10 @@ function validateFile(file: Json, migratedFrom: number | null): LoadResult {
   let nodeAt: number[] | null = null;
   let linkAt: number[] | null = null;
   if (!Array.isArray(file.nodes)) top.bad('nodes', 'a list of nodes (use [] for none)', file.nodes);
-  else ({ records: nodes, at: nodeAt } = keptRecords(file.nodes, validateNode, problems));
+  else ({ records: nodes, at: nodeAt } = keptRecords(file.nodes, validateNode, problems, limits));
   if (!Array.isArray(file.links)) top.bad('links', 'a list of links (use [] for none)', file.links);
-  else ({ records: links, at: linkAt } = keptRecords(file.links, validateLink, problems));
+  else ({ records: links, at: linkAt } = keptRecords(file.links, validateLink, problems, limits));
+  if (limits?.passed) return { ok: false, problems: [] }; // parseJob gives the limit's problem
   const graph = checkGraph(nodes, nodeAt, links, linkAt, problems);
   if (!problems.some((p) => p.severity === 'error')) checkPhases(nodes, links, graph, problems);
   const sizes = sizeWarnings(links, linkAt);

@@ -7,6 +7,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseJob, type LoadResult } from '../../engine/index.js';
+import { checkValueLimits } from '../../engine/model/limits.js';
 import { board, cable, faultCurrentSupply, jobFile, link, mcb, point, unknownSupply } from './helpers.js';
 
 type Json = unknown;
@@ -29,6 +30,10 @@ const BASES: Json[] = [
     extra: { laterFeature: { a: [1, 2] } },
   }),
 ];
+
+// Each base also as a file of the current version (version 2 adds only optional fields), which
+// the loader counts against the limits record by record as it reads (limits.ts LimitCount).
+BASES.push(...BASES.map((b) => ({ ...(b as object), version: 2 })));
 
 /** Every path to a value inside `root`, walked with a stack (the root itself is the empty path). */
 function paths(root: Json): Path[] {
@@ -161,6 +166,16 @@ describe('loading mutated jobs', () => {
           if (result!.ok) seen.loaded++;
           else seen.refused++;
           if (!result!.ok && result!.problems.some((p) => /levels deep/.test(p.message))) seen.deep++;
+          // Counted as the records are read or walked whole first, the limits say the same.
+          let value: unknown = undefined;
+          try {
+            value = JSON.parse(text);
+          } catch {
+            return;
+          }
+          const limit = checkValueLimits(value, text);
+          if (limit !== null) expect(result).toEqual({ ok: false, problems: [limit] });
+          else if (!result!.ok) for (const p of result!.problems) expect(p.message).not.toMatch(/levels deep|elements; nothing was read|elements \(list items/);
         },
       ),
       { numRuns: 10_000 },

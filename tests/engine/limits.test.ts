@@ -92,6 +92,65 @@ describe('elements', () => {
   });
 });
 
+// A file of the current version is counted against the limits record by record as the loader
+// reads it (LimitCount): a record its quick check passed is walked only when it holds a key the
+// format does not name. The same limits, and the same messages, as for the whole-file walk.
+describe('counted as the records are read (a version 2 file)', () => {
+  const v2 = () => ({ ...small(), version: 2 });
+  const links = (file: Record<string, unknown>) => file.links as Array<Record<string, unknown>>;
+  const deepList = (levels: number): unknown => {
+    let v: unknown = [];
+    for (let i = 1; i < levels; i++) v = [v];
+    return v;
+  };
+
+  it('an unknown key in a valid link\'s cable may nest to the limit; one more level is refused at its path', () => {
+    // file 1 → links 2 → link 3 → cable 4 → the unknown key's lists from 5.
+    const within = v2();
+    (links(within)[1]!.cable as Record<string, unknown>).later = deepList(LIMITS.depth - 4);
+    expect(parseJob(JSON.stringify(within)).ok).toBe(true);
+    const over = v2();
+    (links(over)[1]!.cable as Record<string, unknown>).later = deepList(LIMITS.depth - 3);
+    const p = refusal(parseJob(JSON.stringify(over)));
+    expect(p.field).toBe('links[1].cable.later[0][0][0][0]');
+    expect(p.message).toMatch(/more than 8 levels deep at links\[1\]\.cable\.later\[0\]\[0\]\[0\]\[0\] \(line 1 column \d+\)/);
+  });
+
+  it('a 6,000-deep value under an unknown key of a valid node is refused without overflowing the stack', () => {
+    const file = v2();
+    const text = JSON.stringify(file).replace('"id":"MSB"', `"id":"MSB","drawing":${nested(6000)}`);
+    const p = refusal(parseJob(text));
+    expect(p.field).toBe('nodes[1].drawing[0][0][0][0][0]');
+  });
+
+  it('a record with a wrong value nested 6,000 deep gets the limit, not a message that shows the value', () => {
+    const text = JSON.stringify(v2()).replace('"length":20', `"length":${nested(6000)}`);
+    const p = refusal(parseJob(text));
+    expect(p.field).toBe('links[1].cable.length[0][0][0][0]');
+    expect(p.message).toMatch(/more than 8 levels deep/);
+  });
+
+  it("a valid curve's points count as list items: 60,000 load, 70,000 pass the element limit", () => {
+    const withPoints = (n: number) => {
+      const file = v2();
+      const points = Array.from({ length: n }, (_, i) => [i + 1, n + 1 - i]);
+      links(file)[1]!.device = { type: 'curve', rating: 16, points };
+      return JSON.stringify(file);
+    };
+    // 3 nodes, 2 links and three items per point (the point and its two numbers).
+    expect(parseJob(withPoints(60_000)).ok).toBe(true);
+    const p = refusal(parseJob(withPoints(70_000)));
+    expect(p.message).toMatch(/more than 200,000 elements .*passed at links\[1\]\.device\.points\[\d+\]/);
+  });
+
+  it('a list under an unknown key of a valid link counts its items', () => {
+    const file = v2();
+    links(file)[0]!.survey = Array(LIMITS.elements).fill(0);
+    const p = refusal(parseJob(JSON.stringify(file)));
+    expect(p.message).toMatch(/more than 200,000 elements .*passed at links\[0\]\.survey\[\d+\]/);
+  });
+});
+
 describe('size', () => {
   it('a text over 50 MB is refused at once, saying so', () => {
     const text = ' '.repeat(LIMITS.size + 1);
