@@ -2,7 +2,7 @@
 // The fields are defined in schema.ts (LINK); a link the quick check passes is taken as it is.
 
 import type { Link } from './types.js';
-import type { Problem } from './problems.js';
+import { showValue, type Problem } from './problems.js';
 import { isObject, Site, type Json } from './fields.js';
 import { reportFields } from './check-spec.js';
 import { cleanLink, shapeLink } from './generated/clean.js';
@@ -24,7 +24,7 @@ export function validateLink(value: unknown, index: number, problems: Problem[],
   const rawId = isObject(value) && typeof value.id === 'string' && value.id !== '' ? value.id : undefined;
   const site = new Site(problems, () => (rawId ? `links[${index}] (${rawId})` : `links[${index}]`), rawId);
   if (!isObject(value)) {
-    site.report('', `each link must be an object, got ${JSON.stringify(value)}`);
+    site.report('', `each link must be an object, got ${showValue(value)}`);
     return undefined;
   }
   const raw: Json = value;

@@ -3,7 +3,7 @@
 
 import type { Job, JobNode, Link } from './types.js';
 import { CURRENT_VERSION, FORMAT_NAME } from './types.js';
-import type { Problem } from './problems.js';
+import { showValue, type Problem } from './problems.js';
 import { isObject, Site, type Json } from './fields.js';
 import { migrate, MIGRATIONS, type Migration } from './migrations.js';
 import { validateDetails } from './job-details.js';
@@ -79,11 +79,11 @@ function lineAndColumn(text: string, message: string): string {
 export function loadJob(value: unknown, chain: readonly Migration[] = MIGRATIONS, limits?: LimitCount): LoadResult {
   if (!isObject(value)) return fileProblem('the file is not a Loopwright job: expected a JSON object');
   if (value.format !== FORMAT_NAME) {
-    return fileProblem(`the file is not a Loopwright job: format must be "${FORMAT_NAME}", got ${JSON.stringify(value.format)}`);
+    return fileProblem(`the file is not a Loopwright job: format must be "${FORMAT_NAME}", got ${showValue(value.format)}`);
   }
   const version = value.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
-    return fileProblem(`version must be a whole number ≥ 1, got ${JSON.stringify(version)}`);
+    return fileProblem(`version must be a whole number ≥ 1, got ${showValue(version)}`);
   }
   if (version > CURRENT_VERSION) {
     return fileProblem(

@@ -1,7 +1,7 @@
 // Nodes: supplies (with their source), boards and points (the far ends of final subcircuits).
 // The fields are defined in schema.ts (NODE); a node the quick check passes is taken as it is.
 
-import type { Problem } from './problems.js';
+import { showValue, type Problem } from './problems.js';
 import type { JobNode, PointUse } from './types.js';
 import { isObject, Site, type Json } from './fields.js';
 import { reportFields } from './check-spec.js';
@@ -24,7 +24,7 @@ export function validateNode(value: unknown, index: number, problems: Problem[],
   const rawId = isObject(value) && typeof value.id === 'string' && value.id !== '' ? value.id : undefined;
   const site = new Site(problems, () => (rawId ? `nodes[${index}] (${rawId})` : `nodes[${index}]`), rawId);
   if (!isObject(value)) {
-    site.report('', `each node must be an object, got ${JSON.stringify(value)}`);
+    site.report('', `each node must be an object, got ${showValue(value)}`);
     return undefined;
   }
   const raw: Json = value;

@@ -197,6 +197,25 @@ describe('bad values are shown briefly', () => {
     expect(showValue({ a: 'y'.repeat(100) }).length).toBeLessThanOrEqual(61);
   });
 
+  it('a record or envelope value that is not what it must be is cut and escaped in its message too', () => {
+    const file = { ...small(), version: 2 };
+    (file.nodes as unknown[])[1] = Array(150_000).fill(7);
+    (file.links as unknown[])[0] = `\u001b[2J${'x'.repeat(500)}`;
+    const r = parseJob(JSON.stringify(file));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    const node = r.problems.find((q) => q.where === 'nodes[1]');
+    expect(node?.message).toBe('each node must be an object, got [7,7,7,7,7,7,7,7,"…"]');
+    const link = r.problems.find((q) => q.where === 'links[0]');
+    expect(link?.message).toMatch(/^each link must be an object, got "\\u001b\[2Jx+…"$/);
+    expect(link!.message.length).toBeLessThan(100);
+    const format = refusal(parseJob(JSON.stringify({ ...small(), format: 'y'.repeat(10_000) })));
+    expect(format.message).toMatch(/got "y{40}…"$/);
+    const version = refusal(parseJob(JSON.stringify({ ...small(), version: ['\u0007'.repeat(100)] })));
+    expect(version.message.length).toBeLessThan(120);
+    expect(version.message).not.toMatch(/\u0007/);
+  });
+
   it('a long bad value in a job is cut in its message', () => {
     const file = small();
     ((file.links as Record<string, unknown>[])[0]!.cable as Record<string, unknown>).material = 'copper'.repeat(100);
