@@ -198,7 +198,7 @@ describe('bad values are shown briefly', () => {
   });
 
   it('a record or envelope value that is not what it must be is cut and escaped in its message too', () => {
-    const file = { ...small(), version: 2 };
+    const file: Record<string, unknown> = { ...small(), version: 2 };
     (file.nodes as unknown[])[1] = Array(150_000).fill(7);
     (file.links as unknown[])[0] = `\u001b[2J${'x'.repeat(500)}`;
     const r = parseJob(JSON.stringify(file));
